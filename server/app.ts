@@ -1,0 +1,103 @@
+import { existsSync } from 'node:fs';
+import { join } from 'node:path';
+import connectPgSimple from 'connect-pg-simple';
+import express, { type Express } from 'express';
+import session from 'express-session';
+import helmet from 'helmet';
+import pg from 'pg';
+import type { DataSource } from 'typeorm';
+import type { Config } from './config.js';
+import { createPassport, useGoogleStrategy } from './adapters/google-auth.js';
+import type { Mailer } from './adapters/email.js';
+import { User } from './db/entities/user.entity.js';
+import { csrfProtection, SESSION_COOKIE } from './middleware/csrf.js';
+import { apiNotFound, errorHandler } from './middleware/error-handler.js';
+import { requestLog } from './middleware/request-log.js';
+import { authRouter } from './routes/auth.router.js';
+import { healthRouter } from './routes/health.router.js';
+import { userRouter, volunteerRouter } from './routes/user.router.js';
+import { createAuthTokenService } from './services/auth-token.service.js';
+import { createAuthService } from './services/auth.service.js';
+import { createPasswordHasher } from './services/password-hasher.js';
+import { createUserService } from './services/user.service.js';
+
+export interface AppDeps {
+  config: Config;
+  db: DataSource;
+  mailer: Mailer;
+  clock?: () => Date;
+  log?: (line: string) => void;
+  /** Folder of the built client; served with an index.html fallback when present. */
+  clientDir?: string;
+}
+
+export interface App {
+  app: Express;
+  /** Closes what createApp opened (the session pool). */
+  close(): Promise<void>;
+}
+
+/** Builds the Express app from its dependencies; never listens. */
+export function createApp(deps: AppDeps): App {
+  const { config, db } = deps;
+  const log = deps.log ?? ((line: string) => console.log(line));
+  const clock = deps.clock ?? (() => new Date());
+  const secureCookies = config.APP_URL.startsWith('https://');
+
+  const users = createUserService({ db });
+  const tokens = createAuthTokenService({ db, clock });
+  const hasher = createPasswordHasher(config.PASSWORD_SCRYPT_LOG_N);
+  const auth = createAuthService({ db, hasher, tokens, mailer: deps.mailer, appUrl: config.APP_URL, clock, log });
+
+  const passport = createPassport();
+  passport.serializeUser((user, done) => done(null, user.id));
+  passport.deserializeUser((id: string, done) => {
+    users.findById(id).then((u) => done(null, u ?? false), done);
+  });
+  useGoogleStrategy(passport, {
+    clientId: config.GOOGLE_CLIENT_ID,
+    clientSecret: config.GOOGLE_CLIENT_SECRET,
+    callbackUrl: `${config.APP_URL}/api/auth/google/callback`,
+    authorizationUrl: config.GOOGLE_AUTH_URL,
+    tokenUrl: config.GOOGLE_TOKEN_URL,
+    userInfoUrl: config.GOOGLE_USERINFO_URL,
+  }, (identity) => auth.signInWithGoogle(identity));
+
+  const sessionPool = new pg.Pool({ connectionString: config.DATABASE_URL, max: 5 });
+  const PgStore = connectPgSimple(session);
+
+  const app = express();
+  app.disable('x-powered-by');
+  app.use(requestLog({ enabled: config.LOG_REQUESTS === 'true', log }));
+  app.use(helmet({ contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'] } } }));
+  app.use(express.json({ limit: '200kb' }));
+  app.use(
+    session({
+      name: SESSION_COOKIE,
+      secret: config.SESSION_SECRET,
+      store: new PgStore({ pool: sessionPool, tableName: 'session', createTableIfMissing: false }),
+      resave: false,
+      saveUninitialized: false,
+      rolling: true,
+      cookie: { httpOnly: true, sameSite: 'lax', secure: secureCookies, maxAge: 30 * 24 * 3600_000 },
+    }),
+  );
+  app.use(passport.initialize());
+  app.use(passport.session());
+  app.use(csrfProtection);
+
+  app.use('/api/health', healthRouter({ db }));
+  app.use('/api/auth', authRouter({ auth, passport }));
+  app.use('/api/users', userRouter({ users }));
+  app.use('/api/volunteers', volunteerRouter({ users }));
+  app.use('/api', apiNotFound);
+
+  const clientDir = deps.clientDir;
+  if (clientDir && existsSync(join(clientDir, 'index.html'))) {
+    app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
+    app.get('/*splat', (_req, res) => res.sendFile(join(clientDir, 'index.html')));
+  }
+  app.use(errorHandler({ exposeStack: config.NODE_ENV === 'development', log }));
+
+  return { app, close: () => sessionPool.end() };
+}

@@ -1,0 +1,22 @@
+import 'reflect-metadata';
+import { DataSource } from 'typeorm';
+import { AuthToken } from './entities/auth-token.entity.js';
+import { User } from './entities/user.entity.js';
+import { migrations } from './migrations/index.js';
+
+export const entities = [User, AuthToken];
+
+/** One DataSource per process; migrations run explicitly at start, never synchronize. */
+export function createDataSource(url: string): DataSource {
+  return new DataSource({
+    type: 'postgres',
+    url,
+    entities,
+    migrations,
+    synchronize: false,
+    migrationsRun: false,
+    uuidExtension: 'pgcrypto',
+    logging: ['error'],
+    extra: { max: 10 },
+  });
+}

@@ -1,0 +1,25 @@
+import type { DataSource } from 'typeorm';
+import type { PasswordHasher } from '../../services/password-hasher.js';
+import { User } from '../entities/user.entity.js';
+import { DEMO_PASSWORD, demoPeople } from './demo-people.js';
+
+/**
+ * Seeds the demo organisation once: rows are inserted only when missing (by e-mail), so a
+ * second start adds nothing. All demo people share one password hash, computed once.
+ */
+export async function seedDemo(deps: { db: DataSource; hasher: PasswordHasher; now: Date }): Promise<{ created: number }> {
+  const repo = deps.db.getRepository(User);
+  const existing = new Set((await repo.find({ select: { email: true } })).map((u) => u.email));
+  const missing = demoPeople.filter((p) => !existing.has(p.email));
+  if (missing.length === 0) return { created: 0 };
+  const passwordHash = await deps.hasher.hash(DEMO_PASSWORD);
+  const rows = missing.map((p) => ({
+    name: p.name,
+    email: p.email,
+    role: p.role,
+    passwordHash,
+    emailVerifiedAt: p.verified ? deps.now : null,
+  }));
+  await repo.createQueryBuilder().insert().values(rows).orIgnore().execute();
+  return { created: missing.length };
+}

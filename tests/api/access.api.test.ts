@@ -1,0 +1,53 @@
+/**
+ * Every API route × signed-out / volunteer / coordinator / admin. Add a row with each new route:
+ * the expected status is what the role gets for a harmless request (401 signed out, 403 wrong role).
+ */
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import type { Role } from '../../shared/schemas/user.schema.js';
+import { authAgentFor, createTestApp, csrfAgent, type Agent, type TestApp } from '../setup/test-app.js';
+
+type Who = 'anon' | Role;
+interface RouteCase {
+  method: 'get' | 'post' | 'patch' | 'put' | 'delete';
+  path: string;
+  body?: object;
+  expect: Record<Who, number>;
+}
+
+const ALL_OK = { anon: 200, volunteer: 200, coordinator: 200, admin: 200 };
+const SIGNED_IN = { anon: 401, volunteer: 200, coordinator: 200, admin: 200 };
+const STAFF = { anon: 401, volunteer: 403, coordinator: 200, admin: 200 };
+const ADMIN = { anon: 401, volunteer: 403, coordinator: 403, admin: 200 };
+const NOBODY_USER = '00000000-0000-4000-8000-000000000000';
+
+const routes: RouteCase[] = [
+  { method: 'get', path: '/api/health', expect: ALL_OK },
+  { method: 'get', path: '/api/auth/csrf', expect: ALL_OK },
+  { method: 'get', path: '/api/auth/me', expect: SIGNED_IN },
+  { method: 'post', path: '/api/auth/verify-email/resend', expect: { ...SIGNED_IN, volunteer: 202, coordinator: 202, admin: 202 } },
+  { method: 'post', path: '/api/auth/password-reset/request', body: { email: 'nobody@test.ebbroot.test' }, expect: { anon: 202, volunteer: 202, coordinator: 202, admin: 202 } },
+  { method: 'get', path: '/api/users', expect: ADMIN },
+  { method: 'patch', path: `/api/users/${NOBODY_USER}/role`, body: { role: 'volunteer' }, expect: { ...ADMIN, admin: 404 } },
+  { method: 'get', path: '/api/volunteers', expect: STAFF },
+];
+
+let t: TestApp;
+const agents = new Map<Who, { agent: Agent; token: string }>();
+beforeAll(async () => {
+  t = await createTestApp();
+  agents.set('anon', await csrfAgent(t.app));
+  for (const role of ['volunteer', 'coordinator', 'admin'] as const) agents.set(role, await authAgentFor(t, role));
+});
+afterAll(() => t.close());
+
+const cases = routes.flatMap((r) => (Object.keys(r.expect) as Who[]).map((who) => ({ ...r, who, status: r.expect[who] })));
+
+describe('role × route access', () => {
+  it.each(cases)('$method $path as $who → $status', async ({ method, path, body, who, status }) => {
+    const { agent, token } = agents.get(who)!;
+    let req = agent[method](path);
+    req = req.set('X-CSRF-Token', token);
+    const res = body ? await req.send(body) : await req;
+    expect(res.status).toBe(status);
+  });
+});

@@ -9,15 +9,16 @@ import type { DataSource } from 'typeorm';
 import type { Config } from './config.js';
 import { createPassport, useGoogleStrategy } from './adapters/google-auth.js';
 import type { Mailer } from './adapters/email.js';
-import { User } from './db/entities/user.entity.js';
 import { csrfProtection, SESSION_COOKIE } from './middleware/csrf.js';
 import { apiNotFound, errorHandler } from './middleware/error-handler.js';
 import { requestLog } from './middleware/request-log.js';
 import { authRouter } from './routes/auth.router.js';
 import { healthRouter } from './routes/health.router.js';
+import { organisationRouter } from './routes/organisation.router.js';
 import { userRouter, volunteerRouter } from './routes/user.router.js';
 import { createAuthTokenService } from './services/auth-token.service.js';
 import { createAuthService } from './services/auth.service.js';
+import { createOrganisationService } from './services/organisation.service.js';
 import { createPasswordHasher } from './services/password-hasher.js';
 import { createUserService } from './services/user.service.js';
 
@@ -45,6 +46,7 @@ export function createApp(deps: AppDeps): App {
   const secureCookies = config.APP_URL.startsWith('https://');
 
   const users = createUserService({ db });
+  const organisation = createOrganisationService({ db });
   const tokens = createAuthTokenService({ db, clock });
   const hasher = createPasswordHasher(config.PASSWORD_SCRYPT_LOG_N);
   const auth = createAuthService({ db, hasher, tokens, mailer: deps.mailer, appUrl: config.APP_URL, clock, log });
@@ -88,6 +90,7 @@ export function createApp(deps: AppDeps): App {
 
   app.use('/api/health', healthRouter({ db }));
   app.use('/api/auth', authRouter({ auth, passport }));
+  app.use('/api/organisation', organisationRouter({ organisation }));
   app.use('/api/users', userRouter({ users }));
   app.use('/api/volunteers', volunteerRouter({ users }));
   app.use('/api', apiNotFound);

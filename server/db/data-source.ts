@@ -1,10 +1,11 @@
 import 'reflect-metadata';
 import { DataSource } from 'typeorm';
 import { AuthToken } from './entities/auth-token.entity.js';
+import { Organisation } from './entities/organisation.entity.js';
 import { User } from './entities/user.entity.js';
 import { migrations } from './migrations/index.js';
 
-export const entities = [User, AuthToken];
+export const entities = [User, AuthToken, Organisation];
 
 /** One DataSource per process; migrations run explicitly at start, never synchronize. */
 export function createDataSource(url: string): DataSource {

@@ -1,7 +1,8 @@
-import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import { Check, Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import type { Role } from '../../../shared/schemas/user.schema.js';
 
 @Entity({ name: 'app_user' })
+@Check('CHK_app_user_role', `"role" IN ('volunteer', 'coordinator', 'admin')`)
 export class User {
   @PrimaryGeneratedColumn('uuid')
   id: string;

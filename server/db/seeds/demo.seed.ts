@@ -1,5 +1,6 @@
 import type { DataSource } from 'typeorm';
 import type { PasswordHasher } from '../../services/password-hasher.js';
+import { Organisation } from '../entities/organisation.entity.js';
 import { User } from '../entities/user.entity.js';
 import { DEMO_PASSWORD, demoPeople } from './demo-people.js';
 
@@ -8,6 +9,7 @@ import { DEMO_PASSWORD, demoPeople } from './demo-people.js';
  * second start adds nothing. All demo people share one password hash, computed once.
  */
 export async function seedDemo(deps: { db: DataSource; hasher: PasswordHasher; now: Date }): Promise<{ created: number }> {
+  await seedDemoOrganisation(deps.db);
   const repo = deps.db.getRepository(User);
   const existing = new Set((await repo.find({ select: { email: true } })).map((u) => u.email));
   const missing = demoPeople.filter((p) => !existing.has(p.email));
@@ -22,4 +24,20 @@ export async function seedDemo(deps: { db: DataSource; hasher: PasswordHasher; n
   }));
   await repo.createQueryBuilder().insert().values(rows).orIgnore().execute();
   return { created: missing.length };
+}
+
+/** Names the organisation after the demo scenario, once: only while it still has the default name. */
+async function seedDemoOrganisation(db: DataSource): Promise<void> {
+  await db.getRepository(Organisation).update(
+    { id: 1, name: 'Restoration program' },
+    {
+      name: 'Bayhaven Shoreline Trust',
+      legalName: 'Bayhaven Shoreline Trust, Inc. (demo)',
+      taxId: '00-0000000',
+      contactEmail: 'hello@demo.ebbroot.test',
+      units: 'ft',
+      timeZone: 'America/New_York',
+      isDemo: true,
+    },
+  );
 }

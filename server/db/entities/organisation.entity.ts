@@ -1,0 +1,36 @@
+import { Check, Column, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import type { LengthUnit } from '../../../shared/schemas/organisation.schema.js';
+
+/** The one organisation an instance serves (single row, id 1). */
+@Entity({ name: 'organisation' })
+@Check('CHK_organisation_single_row', `"id" = 1`)
+export class Organisation {
+  @PrimaryColumn({ type: 'smallint', default: 1 })
+  id: number;
+
+  @Column({ type: 'varchar', length: 160 })
+  name: string;
+
+  /** Printed on donation receipts. */
+  @Column({ type: 'varchar', length: 200, name: 'legal_name', default: '' })
+  legalName: string;
+
+  @Column({ type: 'varchar', length: 40, name: 'tax_id', default: '' })
+  taxId: string;
+
+  @Column({ type: 'varchar', length: 254, name: 'contact_email', default: '' })
+  contactEmail: string;
+
+  @Column({ type: 'varchar', length: 2, default: 'ft' })
+  units: LengthUnit;
+
+  @Column({ type: 'varchar', length: 64, name: 'time_zone', default: 'America/New_York' })
+  timeZone: string;
+
+  /** Marks seeded demo data, so the interface can say so plainly. */
+  @Column({ type: 'boolean', name: 'is_demo', default: false })
+  isDemo: boolean;
+
+  @UpdateDateColumn({ type: 'timestamptz', name: 'updated_at' })
+  updatedAt: Date;
+}

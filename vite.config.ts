@@ -49,6 +49,8 @@ export default defineConfig({
           environment: 'happy-dom',
           include: ['tests/client/**/*.test.ts'],
           setupFiles: ['tests/setup/client-setup.ts'],
+          // Element Plus' on-demand style entries import .css files: let Vite (not Node) load them in tests.
+          server: { deps: { inline: [/element-plus\/es\/components\/[^/]+\/style\//] } },
         },
       },
       {

@@ -98,7 +98,8 @@ export function createApp(deps: AppDeps): App {
   const clientDir = deps.clientDir;
   if (clientDir && existsSync(join(clientDir, 'index.html'))) {
     app.use(express.static(clientDir, { index: false, maxAge: '1h' }));
-    app.get('/*splat', (_req, res) => res.sendFile(join(clientDir, 'index.html')));
+    // '{*splat}' also matches '/' itself, which '/*splat' does not in Express 5.
+    app.get('/{*splat}', (_req, res) => res.sendFile(join(clientDir, 'index.html')));
   }
   app.use(errorHandler({ exposeStack: config.NODE_ENV === 'development', log }));
 

@@ -1,6 +1,5 @@
 import { randomBytes } from 'node:crypto';
 import type { DataSource } from 'typeorm';
-import type { Role } from '../../shared/schemas/user.schema.js';
 import { User } from '../../server/db/entities/user.entity.js';
 import { createPasswordHasher } from '../../server/services/password-hasher.js';
 

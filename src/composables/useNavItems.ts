@@ -1,0 +1,25 @@
+import { computed, type ComputedRef } from 'vue';
+import { useSessionStore } from '@/stores/session';
+import type { AppRouteName } from '@/router';
+
+export interface NavItem {
+  name: AppRouteName;
+  label: string;
+}
+
+/** The menu for whoever is signed in: volunteers see their own pages, coordinators and admins also People. */
+export function useNavItems(): ComputedRef<NavItem[]> {
+  const session = useSessionStore();
+  return computed(() => {
+    if (!session.isSignedIn) {
+      return [
+        { name: 'sign-in', label: 'Sign in' },
+        { name: 'register', label: 'Create an account' },
+      ];
+    }
+    const items: NavItem[] = [{ name: 'home', label: 'Home' }];
+    if (session.isCoordinator) items.push({ name: 'people', label: 'People' });
+    items.push({ name: 'account', label: 'My account' });
+    return items;
+  });
+}

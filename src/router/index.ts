@@ -1,0 +1,89 @@
+import {
+  createRouter,
+  createWebHistory,
+  useRouter,
+  type LocationQueryRaw,
+  type RouteParamsRawGeneric,
+  type RouteRecordRaw,
+  type Router,
+  type RouterHistory,
+} from 'vue-router';
+import type { Role } from '@shared/schemas/user.schema';
+import { installGuards } from './guards';
+
+declare module 'vue-router' {
+  interface RouteMeta {
+    /** Signed-out visitors are sent to sign in, with `?redirect=` back here. */
+    requiresAuth?: boolean;
+    /** Only these roles may open the page (implies requiresAuth). */
+    roles?: readonly Role[];
+    /** Sign-in and register: signed-in people go home instead. */
+    guestOnly?: boolean;
+    /** Shown in the browser tab before " · Ebbroot". */
+    title?: string;
+  }
+}
+
+/** Every route name; renaming a route breaks the build wherever it is linked. */
+export type AppRouteName =
+  | 'home'
+  | 'sign-in'
+  | 'register'
+  | 'forgot-password'
+  | 'reset-password'
+  | 'verify-email'
+  | 'people'
+  | 'account'
+  | 'no-access'
+  | 'not-found';
+
+type AppRouteRecord = RouteRecordRaw & { name: AppRouteName };
+
+export const routes: AppRouteRecord[] = [
+  { path: '/', name: 'home', component: () => import('@/views/HomeView.vue'), meta: { requiresAuth: true, title: 'Home' } },
+  { path: '/login', name: 'sign-in', component: () => import('@/views/SignInView.vue'), meta: { guestOnly: true, title: 'Sign in' } },
+  { path: '/register', name: 'register', component: () => import('@/views/RegisterView.vue'), meta: { guestOnly: true, title: 'Create an account' } },
+  { path: '/forgot-password', name: 'forgot-password', component: () => import('@/views/ForgotPasswordView.vue'), meta: { title: 'Forgot password' } },
+  { path: '/reset-password', name: 'reset-password', component: () => import('@/views/ResetPasswordView.vue'), meta: { title: 'Choose a new password' } },
+  { path: '/verify-email', name: 'verify-email', component: () => import('@/views/VerifyEmailView.vue'), meta: { title: 'Confirm your e-mail' } },
+  {
+    path: '/people',
+    name: 'people',
+    component: () => import('@/views/PeopleView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'People' },
+  },
+  { path: '/account', name: 'account', component: () => import('@/views/AccountView.vue'), meta: { requiresAuth: true, title: 'My account' } },
+  { path: '/no-access', name: 'no-access', component: () => import('@/views/NoAccessView.vue'), meta: { requiresAuth: true, title: 'Not for your role' } },
+  { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { title: 'Page not found' } },
+];
+
+/** A location by route name only, so links and pushes cannot point at a path that doesn't exist. */
+export interface AppLocation {
+  name: AppRouteName;
+  params?: RouteParamsRawGeneric;
+  query?: LocationQueryRaw;
+  hash?: string;
+}
+
+/** The app's router with its guards; tests pass `createMemoryHistory()`. */
+export function createAppRouter(history: RouterHistory = createWebHistory()): Router {
+  const router = createRouter({
+    history,
+    routes,
+    scrollBehavior: (_to, _from, saved) => saved ?? { top: 0 },
+  });
+  installGuards(router);
+  return router;
+}
+
+/** Typed navigation for components: `const { push } = useAppRouter(); push({ name: 'people' })`. */
+export function useAppRouter(): {
+  push: (to: AppLocation) => Promise<unknown>;
+  replace: (to: AppLocation) => Promise<unknown>;
+} {
+  const router = useRouter();
+  return {
+    push: (to) => router.push(to),
+    replace: (to) => router.replace(to),
+  };
+}

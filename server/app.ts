@@ -8,6 +8,7 @@ import pg from 'pg';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config.js';
 import { createPassport, useGoogleStrategy } from './adapters/google-auth.js';
+import { createTideStationDirectory, type TideStationDirectory } from './adapters/tide-stations.js';
 import type { Mailer } from './adapters/email.js';
 import { csrfProtection, SESSION_COOKIE } from './middleware/csrf.js';
 import { apiNotFound, errorHandler } from './middleware/error-handler.js';
@@ -15,10 +16,17 @@ import { requestLog } from './middleware/request-log.js';
 import { authRouter } from './routes/auth.router.js';
 import { healthRouter } from './routes/health.router.js';
 import { organisationRouter } from './routes/organisation.router.js';
+import { siteRouter } from './routes/site.router.js';
+import { tideRouter } from './routes/tide.router.js';
+import { workdayRouter } from './routes/workday.router.js';
 import { userRouter, volunteerRouter } from './routes/user.router.js';
 import { createAuthTokenService } from './services/auth-token.service.js';
 import { createAuthService } from './services/auth.service.js';
 import { createOrganisationService } from './services/organisation.service.js';
+import { createSiteTideService } from './services/site-tide.service.js';
+import { createSiteService } from './services/site.service.js';
+import { createStationService } from './services/station.service.js';
+import { createWorkdayService } from './services/workday.service.js';
 import { createPasswordHasher } from './services/password-hasher.js';
 import { createUserService } from './services/user.service.js';
 
@@ -30,6 +38,8 @@ export interface AppDeps {
   log?: (line: string) => void;
   /** Folder of the built client; served with an index.html fallback when present. */
   clientDir?: string;
+  /** Tide stations; the open dataset by default. */
+  tideStations?: TideStationDirectory;
 }
 
 export interface App {
@@ -47,6 +57,10 @@ export function createApp(deps: AppDeps): App {
 
   const users = createUserService({ db });
   const organisation = createOrganisationService({ db });
+  const stations = createStationService({ stations: deps.tideStations ?? createTideStationDirectory() });
+  const sites = createSiteService({ db, stations });
+  const siteTide = createSiteTideService({ sites, stations, organisation });
+  const workdays = createWorkdayService({ db, sites });
   const tokens = createAuthTokenService({ db, clock });
   const hasher = createPasswordHasher(config.PASSWORD_SCRYPT_LOG_N);
   const auth = createAuthService({ db, hasher, tokens, mailer: deps.mailer, appUrl: config.APP_URL, clock, log });
@@ -91,6 +105,9 @@ export function createApp(deps: AppDeps): App {
   app.use('/api/health', healthRouter({ db }));
   app.use('/api/auth', authRouter({ auth, passport }));
   app.use('/api/organisation', organisationRouter({ organisation }));
+  app.use('/api', tideRouter({ stations, siteTide, organisation }));
+  app.use('/api/sites', siteRouter({ sites }));
+  app.use('/api/workdays', workdayRouter({ workdays }));
   app.use('/api/users', userRouter({ users }));
   app.use('/api/volunteers', volunteerRouter({ users }));
   app.use('/api', apiNotFound);

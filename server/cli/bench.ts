@@ -12,6 +12,7 @@ import { createPasswordHasher } from '../services/password-hasher.js';
 import { dropDatabase, ensureDatabase, startLocalPostgres } from './postgres.js';
 import { projectRoot } from './stack.js';
 import { TEST_PG_PORT } from '../../tests/setup/test-env.js';
+import { benchTide } from './bench-tide.js';
 
 const quantile = (sorted: number[], q: number) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? 0;
 const fmt = (ms: number) => `${ms.toFixed(1)} ms`;
@@ -62,6 +63,8 @@ console.log(`GET /api/health (DB round trip), 2000 requests × 10 concurrent: ${
 const me = await timeRequests(`${base}/api/auth/me`, 2000, 10);
 console.log(`GET /api/auth/me (signed out), 2000 requests × 10 concurrent: ${me.rps.toFixed(0)} req/s, p50 ${fmt(me.p50)}, p95 ${fmt(me.p95)}`);
 console.log(`server process memory: rss ${(process.memoryUsage().rss / 2 ** 20).toFixed(0)} MiB, heap used ${(process.memoryUsage().heapUsed / 2 ** 20).toFixed(0)} MiB`);
+
+await benchTide((line) => console.log(line));
 
 server.closeAllConnections();
 server.close();

@@ -2,10 +2,12 @@ import 'reflect-metadata';
 import { DataSource } from 'typeorm';
 import { AuthToken } from './entities/auth-token.entity.js';
 import { Organisation } from './entities/organisation.entity.js';
+import { Site } from './entities/site.entity.js';
+import { Workday } from './entities/workday.entity.js';
 import { User } from './entities/user.entity.js';
 import { migrations } from './migrations/index.js';
 
-export const entities = [User, AuthToken, Organisation];
+export const entities = [User, AuthToken, Organisation, Site, Workday];
 
 /** One DataSource per process; migrations run explicitly at start, never synchronize. */
 export function createDataSource(url: string): DataSource {

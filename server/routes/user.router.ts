@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import { ChangeRoleBody, ListUsersQuery, UserIdParams } from '../../shared/schemas/user.schema.js';
-import { requireRole } from '../middleware/auth.js';
+import { currentUser, requireRole } from '../middleware/auth.js';
 import type { UserService } from '../services/user.service.js';
 
 /** `/api/users`: every account and role changes, for admins. */
@@ -14,7 +14,7 @@ export function userRouter(deps: { users: UserService }): Router {
 
   r.patch('/:id/role', async (req, res) => {
     const { id } = UserIdParams.parse(req.params);
-    res.json({ user: await deps.users.changeRole(id, ChangeRoleBody.parse(req.body).role) });
+    res.json({ user: await deps.users.changeRole(currentUser(req).id, id, ChangeRoleBody.parse(req.body).role) });
   });
   return r;
 }

@@ -10,6 +10,7 @@ const toSettings = (o: Organisation): OrganisationSettings => ({
   legalName: o.legalName,
   taxId: o.taxId,
   contactEmail: o.contactEmail,
+  windowWeights: o.windowWeights,
 });
 
 export function createOrganisationService(deps: { db: DataSource }) {

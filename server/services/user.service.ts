@@ -25,20 +25,16 @@ export function createUserService(deps: { db: DataSource }) {
       return (await qb.getMany()).map(toRow);
     },
 
-    /** Admins change roles; the last admin cannot demote themselves into a locked-out organisation. */
-    async changeRole(userId: string, role: Role): Promise<PublicUser> {
-      return deps.db.transaction(async (tx) => {
-        const users = tx.getRepository(User);
-        const user = await users.findOne({ where: { id: userId }, lock: { mode: 'pessimistic_write' } });
-        if (!user) throw new NotFoundError('User');
-        if (user.role === 'admin' && role !== 'admin') {
-          const admins = await users.countBy({ role: 'admin' });
-          if (admins <= 1) throw new ValidationError('An organisation needs at least one admin', { role: ['the last admin must stay admin'] });
-        }
-        user.role = role;
-        await users.save(user);
-        return toPublicUser(user);
-      });
+    /**
+     * Admins change roles, but never their own: so the last admin can never be demoted and an
+     * organisation cannot lock itself out.
+     */
+    async changeRole(actorId: string, userId: string, role: Role): Promise<PublicUser> {
+      if (actorId === userId) throw new ValidationError('You cannot change your own role; ask another admin', { role: ['cannot change your own role'] });
+      const user = await repo.findOneBy({ id: userId });
+      if (!user) throw new NotFoundError('User');
+      user.role = role;
+      return toPublicUser(await repo.save(user));
     },
   };
 }

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { isTimeZone } from '../domain/time-zone.js';
 
 export const LengthUnit = z.enum(['ft', 'm']);
 export type LengthUnit = z.infer<typeof LengthUnit>;
@@ -12,22 +13,22 @@ export const PublicOrganisation = z.object({
 });
 export type PublicOrganisation = z.infer<typeof PublicOrganisation>;
 
+const weight = z.number({ message: 'must be a number' }).min(0, { message: 'must be 0 or more' }).max(1, { message: 'must be at most 1' });
+
+/** Relative weights of the low-water window ranking; any non-negative numbers, normalised when used. */
+export const WindowWeights = z
+  .object({ duration: weight, lowWater: weight, weekend: weight, startHour: weight })
+  .refine((w) => w.duration + w.lowWater + w.weekend + w.startHour > 0, { message: 'at least one weight must be above 0' });
+export type WindowWeights = z.infer<typeof WindowWeights>;
+
 /** What admins see and edit. */
 export const OrganisationSettings = PublicOrganisation.extend({
   legalName: z.string(),
   taxId: z.string(),
   contactEmail: z.string(),
+  windowWeights: WindowWeights,
 });
 export type OrganisationSettings = z.infer<typeof OrganisationSettings>;
-
-const isTimeZone = (tz: string) => {
-  try {
-    new Intl.DateTimeFormat('en-US', { timeZone: tz });
-    return true;
-  } catch {
-    return false;
-  }
-};
 
 export const UpdateOrganisationBody = z
   .object({
@@ -37,6 +38,7 @@ export const UpdateOrganisationBody = z
     contactEmail: z.union([z.literal(''), z.email({ message: 'must be an e-mail address' })]),
     units: LengthUnit,
     timeZone: z.string().refine(isTimeZone, { message: 'must be an IANA time zone such as America/New_York' }),
+    windowWeights: WindowWeights,
   })
   .partial()
   .strict();

@@ -19,6 +19,8 @@ const SIGNED_IN = { anon: 401, volunteer: 200, coordinator: 200, admin: 200 };
 const STAFF = { anon: 401, volunteer: 403, coordinator: 200, admin: 200 };
 const ADMIN = { anon: 401, volunteer: 403, coordinator: 403, admin: 200 };
 const NOBODY_USER = '00000000-0000-4000-8000-000000000000';
+const NO_ID = NOBODY_USER;
+const SH = encodeURIComponent('noaa/8726738');
 
 const routes: RouteCase[] = [
   { method: 'get', path: '/api/health', expect: ALL_OK },
@@ -29,6 +31,20 @@ const routes: RouteCase[] = [
   { method: 'get', path: '/api/organisation', expect: ALL_OK },
   { method: 'get', path: '/api/organisation/settings', expect: ADMIN },
   { method: 'patch', path: '/api/organisation/settings', body: {}, expect: ADMIN },
+  { method: 'get', path: '/api/stations?q=Safety', expect: SIGNED_IN },
+  { method: 'get', path: `/api/stations/${SH}`, expect: SIGNED_IN },
+  { method: 'get', path: `/api/stations/${SH}/extremes?from=2026-01-01&to=2026-01-02`, expect: SIGNED_IN },
+  { method: 'get', path: `/api/stations/${SH}/levels?from=2026-01-01&to=2026-01-02&step=60`, expect: SIGNED_IN },
+  { method: 'get', path: `/api/stations/${SH}/datums?from=2026-01-01&to=2026-01-15`, expect: SIGNED_IN },
+  { method: 'get', path: '/api/sites', expect: SIGNED_IN },
+  { method: 'get', path: `/api/sites/${NO_ID}`, expect: { ...SIGNED_IN, volunteer: 404, coordinator: 404, admin: 404 } },
+  { method: 'post', path: '/api/sites', body: {}, expect: { ...STAFF, coordinator: 400, admin: 400 } },
+  { method: 'patch', path: `/api/sites/${NO_ID}`, body: {}, expect: { ...STAFF, coordinator: 404, admin: 404 } },
+  { method: 'get', path: `/api/sites/${NO_ID}/tide?from=2026-01-01&to=2026-01-02`, expect: { ...SIGNED_IN, volunteer: 404, coordinator: 404, admin: 404 } },
+  { method: 'get', path: `/api/sites/${NO_ID}/windows?from=2026-01-01&to=2026-01-02`, expect: { ...SIGNED_IN, volunteer: 404, coordinator: 404, admin: 404 } },
+  { method: 'get', path: '/api/windows?from=2026-01-01&to=2026-01-02', expect: SIGNED_IN },
+  { method: 'get', path: '/api/workdays', expect: STAFF },
+  { method: 'post', path: '/api/workdays', body: {}, expect: { ...STAFF, coordinator: 400, admin: 400 } },
   { method: 'get', path: '/api/users', expect: ADMIN },
   { method: 'patch', path: `/api/users/${NOBODY_USER}/role`, body: { role: 'volunteer' }, expect: { ...ADMIN, admin: 404 } },
   { method: 'get', path: '/api/volunteers', expect: STAFF },

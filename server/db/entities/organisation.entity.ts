@@ -1,5 +1,5 @@
 import { Check, Column, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
-import type { LengthUnit } from '../../../shared/schemas/organisation.schema.js';
+import type { LengthUnit, WindowWeights } from '../../../shared/schemas/organisation.schema.js';
 
 /** The one organisation an instance serves (single row, id 1). */
 @Entity({ name: 'organisation' })
@@ -26,6 +26,10 @@ export class Organisation {
 
   @Column({ type: 'varchar', length: 64, name: 'time_zone', default: 'America/New_York' })
   timeZone: string;
+
+  /** How low-water windows are ranked (see server/domain/tide/window-ranking.ts). */
+  @Column({ type: 'jsonb', name: 'window_weights', default: () => `'{"duration":0.4,"lowWater":0.2,"weekend":0.25,"startHour":0.15}'` })
+  windowWeights: WindowWeights;
 
   /** Marks seeded demo data, so the interface can say so plainly. */
   @Column({ type: 'boolean', name: 'is_demo', default: false })

@@ -1,8 +1,10 @@
 import type { DataSource } from 'typeorm';
 import type { PasswordHasher } from '../../services/password-hasher.js';
 import { Organisation } from '../entities/organisation.entity.js';
+import { Site } from '../entities/site.entity.js';
 import { User } from '../entities/user.entity.js';
 import { DEMO_PASSWORD, demoPeople } from './demo-people.js';
+import { demoSites } from './demo-sites.js';
 
 /**
  * Seeds the demo organisation once: rows are inserted only when missing (by e-mail), so a
@@ -10,6 +12,7 @@ import { DEMO_PASSWORD, demoPeople } from './demo-people.js';
  */
 export async function seedDemo(deps: { db: DataSource; hasher: PasswordHasher; now: Date }): Promise<{ created: number }> {
   await seedDemoOrganisation(deps.db);
+  await deps.db.getRepository(Site).createQueryBuilder().insert().values(demoSites).orIgnore().execute();
   const repo = deps.db.getRepository(User);
   const existing = new Set((await repo.find({ select: { email: true } })).map((u) => u.email));
   const missing = demoPeople.filter((p) => !existing.has(p.email));

@@ -13,3 +13,4 @@ export * from './intervals.js';
 export * from './windows.js';
 export * from './window-ranking.js';
 export * from './submergence.js';
+export * from './site-windows.js';

@@ -26,6 +26,19 @@ ensureChromium();
 const postgres = await startLocalPostgres({ projectRoot, name: 'pg-test', port: TEST_PG_PORT, fast: true, log });
 log(`Test PostgreSQL on 127.0.0.1:${TEST_PG_PORT} (data in ${postgres.dataDir})`);
 
+/** Runs a checker over the whole tree; each counts as one check in the closing line. */
+function check(name: string, script: string, args: string[]): boolean {
+  log(`${name}…`);
+  const res = spawnSync(process.execPath, [join(projectRoot, 'node_modules', ...script.split('/')), ...args], { cwd: projectRoot, stdio: 'inherit' });
+  log(res.status === 0 ? `${name}: clean` : `${name}: problems found (see above)`);
+  return res.status === 0;
+}
+const checks = [
+  check('eslint', 'eslint/bin/eslint.js', ['.']),
+  check('type check (vue-tsc)', 'vue-tsc/bin/vue-tsc.js', ['--noEmit', '-p', 'tsconfig.json']),
+];
+const checksFailed = checks.filter((ok) => !ok).length;
+
 const reportDir = join(projectRoot, '.data', 'test-report');
 mkdirSync(reportDir, { recursive: true });
 const reportFile = join(reportDir, 'vitest.json');
@@ -40,9 +53,11 @@ postgres.stop();
 let summary = 'no test report was written';
 if (existsSync(reportFile)) {
   const report = JSON.parse(readFileSync(reportFile, 'utf8')) as { numPassedTests: number; numFailedTests: number; numPendingTests: number; numTodoTests: number };
-  summary = `${report.numPassedTests} passed, ${report.numFailedTests} failed`;
+  const passed = report.numPassedTests + checks.length - checksFailed;
+  const failed = report.numFailedTests + checksFailed;
+  summary = `${passed} passed, ${failed} failed`;
   const skipped = report.numPendingTests + report.numTodoTests;
   if (skipped > 0) summary += `, ${skipped} skipped`;
 }
 console.log(`\n${summary}`);
-process.exit(res.status ?? 1);
+process.exit(checksFailed > 0 ? 1 : (res.status ?? 1));

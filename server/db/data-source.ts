@@ -4,10 +4,16 @@ import { AuthToken } from './entities/auth-token.entity.js';
 import { Organisation } from './entities/organisation.entity.js';
 import { Site } from './entities/site.entity.js';
 import { Workday } from './entities/workday.entity.js';
+import { WorkdayRole } from './entities/workday-role.entity.js';
+import { Signup } from './entities/signup.entity.js';
+import { VolunteerProfile } from './entities/volunteer-profile.entity.js';
+import { WaiverVersion } from './entities/waiver-version.entity.js';
+import { AuditLog } from './entities/audit-log.entity.js';
+import { OutboxMessage } from './entities/outbox-message.entity.js';
 import { User } from './entities/user.entity.js';
 import { migrations } from './migrations/index.js';
 
-export const entities = [User, AuthToken, Organisation, Site, Workday];
+export const entities = [User, AuthToken, Organisation, Site, Workday, WorkdayRole, Signup, VolunteerProfile, WaiverVersion, AuditLog, OutboxMessage];
 
 /** One DataSource per process; migrations run explicitly at start, never synchronize. */
 export function createDataSource(url: string): DataSource {

@@ -3,21 +3,14 @@
  * order can break compiled code in ways the test runner's transform hides.
  */
 import { spawn, spawnSync, type ChildProcess } from 'node:child_process';
-import { createServer } from 'node:net';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { projectRoot } from '../../server/cli/stack.js';
+import { freePort } from '../setup/free-port.js';
 
 let child: ChildProcess | undefined;
 let base = '';
 
-const freePort = () =>
-  new Promise<number>((resolve) => {
-    const s = createServer().listen(0, '127.0.0.1', () => {
-      const addr = s.address();
-      s.close(() => resolve(typeof addr === 'object' && addr ? addr.port : 0));
-    });
-  });
 
 beforeAll(async () => {
   const tsc = spawnSync(process.execPath, [join(projectRoot, 'node_modules', 'typescript', 'bin', 'tsc'), '-p', 'server/tsconfig.build.json'], { cwd: projectRoot, encoding: 'utf8' });

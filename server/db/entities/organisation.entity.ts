@@ -27,8 +27,8 @@ export class Organisation {
   @Column({ type: 'varchar', length: 64, name: 'time_zone', default: 'America/New_York' })
   timeZone: string;
 
-  /** How low-water windows are ranked (see server/domain/tide/window-ranking.ts). */
-  @Column({ type: 'jsonb', name: 'window_weights', default: () => `'{"duration":0.4,"lowWater":0.2,"weekend":0.25,"startHour":0.15}'` })
+  /** How low-water windows are ranked (see server/domain/tide/window-ranking.ts); default written as PostgreSQL prints jsonb. */
+  @Column({ type: 'jsonb', name: 'window_weights', default: () => `'{"weekend": 0.25, "duration": 0.4, "lowWater": 0.2, "startHour": 0.15}'` })
   windowWeights: WindowWeights;
 
   /** Marks seeded demo data, so the interface can say so plainly. */

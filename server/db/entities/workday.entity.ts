@@ -36,6 +36,34 @@ export class Workday {
   @Column({ type: 'varchar', length: 20, default: 'draft' })
   status: WorkdayStatus;
 
+  @Column({ type: 'text', default: '' })
+  description: string;
+
+  /** Where the crew meets; the site's launch when empty. */
+  @Column({ type: 'varchar', length: 200, name: 'meeting_point', default: '' })
+  meetingPoint: string;
+
+  @Column({ type: 'text', name: 'what_to_bring', default: '' })
+  whatToBring: string;
+
+  /** Youngest age (in years on the day) that may sign up; 0 for none. */
+  @Column({ type: 'integer', name: 'minimum_age', default: 0 })
+  minimumAge: number;
+
+  /** Total crew cap across roles. */
+  @Column({ type: 'integer', default: 12 })
+  capacity: number;
+
+  /** iCalendar SEQUENCE: raised on every change a calendar should show. */
+  @Column({ type: 'integer', default: 0 })
+  sequence: number;
+
+  @Column({ type: 'text', name: 'cancel_message', default: '' })
+  cancelMessage: string;
+
+  @Column({ type: 'timestamptz', name: 'published_at', nullable: true })
+  publishedAt: Date | null;
+
   @Column({ type: 'uuid', name: 'created_by_id', nullable: true })
   createdById: string | null;
 

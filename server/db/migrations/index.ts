@@ -3,6 +3,7 @@ import { CreateOrganisation1796162415507 } from './1796162415507-CreateOrganisat
 import { CreateSite1796162470126 } from './1796162470126-CreateSite.js';
 import { AddWindowWeights1796163225373 } from './1796163225373-AddWindowWeights.js';
 import { CreateWorkday1796163241140 } from './1796163241140-CreateWorkday.js';
+import { AddCrews1796163517092 } from './1796163517092-AddCrews.js';
 
 /** Every migration, in order; listed as classes (not globs) so tsx, vitest and compiled output agree. */
-export const migrations = [CreateUserAndAuthToken1796161902518, CreateOrganisation1796162415507, CreateSite1796162470126, AddWindowWeights1796163225373, CreateWorkday1796163241140];
+export const migrations = [CreateUserAndAuthToken1796161902518, CreateOrganisation1796162415507, CreateSite1796162470126, AddWindowWeights1796163225373, CreateWorkday1796163241140, AddCrews1796163517092];

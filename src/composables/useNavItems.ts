@@ -7,7 +7,7 @@ export interface NavItem {
   label: string;
 }
 
-/** The menu for whoever is signed in: volunteers see their own pages, coordinators and admins also People. */
+/** The menu for whoever is signed in: volunteers see their own pages, coordinators and admins also People, admins Settings. */
 export function useNavItems(): ComputedRef<NavItem[]> {
   const session = useSessionStore();
   return computed(() => {
@@ -17,8 +17,13 @@ export function useNavItems(): ComputedRef<NavItem[]> {
         { name: 'register', label: 'Create an account' },
       ];
     }
-    const items: NavItem[] = [{ name: 'home', label: 'Home' }];
+    const items: NavItem[] = [
+      { name: 'home', label: 'Home' },
+      { name: 'sites', label: 'Sites' },
+      { name: 'window-calendar', label: 'Tide calendar' },
+    ];
     if (session.isCoordinator) items.push({ name: 'people', label: 'People' });
+    if (session.isAdmin) items.push({ name: 'organisation-settings', label: 'Settings' });
     items.push({ name: 'account', label: 'My account' });
     return items;
   });

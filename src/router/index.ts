@@ -33,7 +33,13 @@ export type AppRouteName =
   | 'reset-password'
   | 'verify-email'
   | 'people'
+  | 'sites'
+  | 'site-new'
+  | 'site-edit'
+  | 'site-tide'
+  | 'window-calendar'
   | 'account'
+  | 'organisation-settings'
   | 'no-access'
   | 'not-found';
 
@@ -52,6 +58,27 @@ export const routes: AppRouteRecord[] = [
     component: () => import('@/views/PeopleView.vue'),
     meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'People' },
   },
+  {
+    path: '/settings',
+    name: 'organisation-settings',
+    component: () => import('@/views/OrganisationSettingsView.vue'),
+    meta: { requiresAuth: true, roles: ['admin'], title: 'Organisation settings' },
+  },
+  { path: '/sites', name: 'sites', component: () => import('@/views/SitesView.vue'), meta: { requiresAuth: true, title: 'Sites' } },
+  {
+    path: '/sites/new',
+    name: 'site-new',
+    component: () => import('@/views/SiteFormView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'New site' },
+  },
+  {
+    path: '/sites/:id/edit',
+    name: 'site-edit',
+    component: () => import('@/views/SiteFormView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Edit site' },
+  },
+  { path: '/sites/:id', name: 'site-tide', component: () => import('@/views/SiteTideView.vue'), meta: { requiresAuth: true, title: 'Tide board' } },
+  { path: '/windows', name: 'window-calendar', component: () => import('@/views/WindowCalendarView.vue'), meta: { requiresAuth: true, title: 'Tide calendar' } },
   { path: '/account', name: 'account', component: () => import('@/views/AccountView.vue'), meta: { requiresAuth: true, title: 'My account' } },
   { path: '/no-access', name: 'no-access', component: () => import('@/views/NoAccessView.vue'), meta: { requiresAuth: true, title: 'Not for your role' } },
   { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { title: 'Page not found' } },

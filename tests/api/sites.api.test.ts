@@ -70,6 +70,14 @@ describe('PATCH /api/sites/:id', () => {
     expect(res.body.site).toMatchObject({ bedElevationM: 0.35, salinityPpt: 27, name: created.name, routeElevationM: created.routeElevationM });
   });
 
+  it('leaves fields it was not sent alone (no defaults creep into a partial update)', async () => {
+    const { agent, token } = await authAgentFor(t, 'coordinator');
+    const created = (await agent.post('/api/sites').set('X-CSRF-Token', token).send(siteBody({ workingDepthM: 0.6, salinityPpt: 30, notes: 'keep me' }))).body.site;
+    const res = await agent.patch(`/api/sites/${created.id}`).set('X-CSRF-Token', token).send({ name: `${created.name} renamed` });
+    expect(res.status).toBe(200);
+    expect(res.body.site).toMatchObject({ workingDepthM: 0.6, salinityPpt: 30, notes: 'keep me', launchName: created.launchName });
+  });
+
   it('answers 404 for an unknown site', async () => {
     const { agent, token } = await authAgentFor(t, 'coordinator');
     expect((await agent.patch('/api/sites/00000000-0000-4000-8000-000000000000').set('X-CSRF-Token', token).send({ notes: 'x' })).status).toBe(404);

@@ -2,12 +2,25 @@ import { afterAll, afterEach, beforeAll } from 'vitest';
 import { cleanup } from '@testing-library/vue';
 import { http, HttpResponse } from 'msw';
 import { setupServer } from 'msw/node';
+import type { PublicOrganisation } from '@shared/schemas/organisation.schema';
 import { resetCsrfToken } from '@/api/http';
 
 export const CSRF_TOKEN = 'test-csrf-token';
 
+/** What GET /api/organisation answers unless a test says otherwise: a real (not demo) organisation. */
+export const DEFAULT_ORGANISATION: PublicOrganisation = {
+  name: 'Harbour Fringe Restoration',
+  isDemo: false,
+  units: 'ft',
+  timeZone: 'America/New_York',
+};
+
 /** MSW for client tests: any request without a handler fails the test. Add handlers with `server.use(...)`. */
-export const server = setupServer(http.get('/api/auth/csrf', () => HttpResponse.json({ token: CSRF_TOKEN })));
+export const server = setupServer(
+  http.get('/api/auth/csrf', () => HttpResponse.json({ token: CSRF_TOKEN })),
+  // The shell loads the organisation at start-up, so every app-level test needs an answer.
+  http.get('/api/organisation', () => HttpResponse.json({ organisation: DEFAULT_ORGANISATION })),
+);
 
 beforeAll(() => server.listen({ onUnhandledRequest: 'error' }));
 afterEach(() => {

@@ -19,21 +19,36 @@ describe('AppTopBar', () => {
     await setViewport(1024, 768);
   });
 
-  it('gives volunteers Home and My account, with their name and role', async () => {
+  it('gives volunteers Home, Sites, Tide calendar and My account, with their name and role', async () => {
     await renderApp('/', buildUser({ role: 'volunteer', name: 'Lena Park' }));
 
     await screen.findByRole('heading', { level: 1, name: 'Hello, Lena' });
-    expect(navLinks()).toEqual(['Home', 'My account']);
+    expect(navLinks()).toEqual(['Home', 'Sites', 'Tide calendar', 'My account']);
     const banner = within(screen.getByRole('banner'));
     expect(banner.getByText('Lena Park')).toBeTruthy();
     expect(banner.getByText('Volunteer')).toBeTruthy();
   });
 
-  it.each(['coordinator', 'admin'] as const)('adds People for the %s role', async (role) => {
-    await renderApp('/', buildUser({ role }));
+  it('adds People for coordinators', async () => {
+    await renderApp('/', buildUser({ role: 'coordinator' }));
 
     await screen.findByRole('heading', { level: 2, name: 'At the water' });
-    expect(navLinks()).toEqual(['Home', 'People', 'My account']);
+    expect(navLinks()).toEqual(['Home', 'Sites', 'Tide calendar', 'People', 'My account']);
+  });
+
+  it('adds Settings for admins, just before My account', async () => {
+    await renderApp('/', buildUser({ role: 'admin' }));
+
+    await screen.findByRole('heading', { level: 2, name: 'At the water' });
+    expect(navLinks().slice(-2)).toEqual(['Settings', 'My account']);
+    expect(navLinks()).toContain('People');
+  });
+
+  it.each(['volunteer', 'coordinator'] as const)('shows no Settings to the %s role', async (role) => {
+    await renderApp('/', buildUser({ role }));
+
+    await screen.findByRole('link', { name: 'My account' });
+    expect(navLinks()).not.toContain('Settings');
   });
 
   it('signs out and shows the sign-in page', async () => {
@@ -65,7 +80,7 @@ describe('AppTopBar', () => {
     await user.click(menuButton);
 
     const drawer = await screen.findByRole('dialog', { name: 'Menu' });
-    expect(within(drawer).getAllByRole('link').map((a) => a.textContent?.trim())).toEqual(['Home', 'People', 'My account']);
+    expect(within(drawer).getAllByRole('link').map((a) => a.textContent?.trim())).toEqual(['Home', 'Sites', 'Tide calendar', 'People', 'My account']);
     expect(within(drawer).getByText('Kai Torres')).toBeTruthy();
     expect(menuButton.getAttribute('aria-expanded')).toBe('true');
   });

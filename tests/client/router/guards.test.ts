@@ -52,6 +52,22 @@ describe('router guards', () => {
     expect(route.name).toBe('people');
   });
 
+  it.each(['volunteer', 'coordinator'] as const)('keeps a %s out of organisation settings', async (role) => {
+    mockMe(buildUser({ role }));
+
+    const route = await navigate('/settings');
+
+    expect(route.name).toBe('no-access');
+  });
+
+  it('lets an admin open organisation settings', async () => {
+    mockMe(buildUser({ role: 'admin' }));
+
+    const route = await navigate('/settings');
+
+    expect(route.name).toBe('organisation-settings');
+  });
+
   it('sends a signed-in person away from sign-in to home', async () => {
     mockMe(buildUser());
 

@@ -19,6 +19,10 @@ import { organisationRouter } from './routes/organisation.router.js';
 import { siteRouter } from './routes/site.router.js';
 import { tideRouter } from './routes/tide.router.js';
 import { workdayRouter } from './routes/workday.router.js';
+import { calendarRouter } from './routes/calendar.router.js';
+import { crewRouter } from './routes/crew.router.js';
+import { meRouter } from './routes/me.router.js';
+import { waiverRouter } from './routes/waiver.router.js';
 import { userRouter, volunteerRouter } from './routes/user.router.js';
 import { createAuthTokenService } from './services/auth-token.service.js';
 import { createAuthService } from './services/auth.service.js';
@@ -27,6 +31,14 @@ import { createSiteTideService } from './services/site-tide.service.js';
 import { createSiteService } from './services/site.service.js';
 import { createStationService } from './services/station.service.js';
 import { createWorkdayService } from './services/workday.service.js';
+import type { CrewNotifier } from './services/crew-notifier.js';
+import { createAttendanceService } from './services/attendance.service.js';
+import { createCalendarService } from './services/calendar.service.js';
+import { createReminderOptOutService } from './services/reminder-opt-out.service.js';
+import { createMeService } from './services/me.service.js';
+import { createRosterService } from './services/roster.service.js';
+import { createSignupService } from './services/signup.service.js';
+import { createWaiverService } from './services/waiver.service.js';
 import { createPasswordHasher } from './services/password-hasher.js';
 import { createUserService } from './services/user.service.js';
 
@@ -38,6 +50,8 @@ export interface AppDeps {
   log?: (line: string) => void;
   /** Folder of the built client; served with an index.html fallback when present. */
   clientDir?: string;
+  /** Tells crews about their places and changes (writes the mail outbox). */
+  notifier: CrewNotifier;
   /** Tide stations; the open dataset by default. */
   tideStations?: TideStationDirectory;
 }
@@ -60,7 +74,15 @@ export function createApp(deps: AppDeps): App {
   const stations = createStationService({ stations: deps.tideStations ?? createTideStationDirectory() });
   const sites = createSiteService({ db, stations });
   const siteTide = createSiteTideService({ sites, stations, organisation });
-  const workdays = createWorkdayService({ db, sites });
+  const { notifier } = deps;
+  const workdays = createWorkdayService({ db, sites, notifier });
+  const waivers = createWaiverService({ db });
+  const signups = createSignupService({ db, sites, waivers, notifier, clock });
+  const roster = createRosterService({ db });
+  const attendance = createAttendanceService({ db, clock });
+  const me = createMeService({ db });
+  const calendar = createCalendarService({ db, appUrl: config.APP_URL, clock });
+  const optOut = createReminderOptOutService({ db, secret: config.SESSION_SECRET });
   const tokens = createAuthTokenService({ db, clock });
   const hasher = createPasswordHasher(config.PASSWORD_SCRYPT_LOG_N);
   const auth = createAuthService({ db, hasher, tokens, mailer: deps.mailer, appUrl: config.APP_URL, clock, log });
@@ -107,7 +129,12 @@ export function createApp(deps: AppDeps): App {
   app.use('/api/organisation', organisationRouter({ organisation }));
   app.use('/api', tideRouter({ stations, siteTide, organisation }));
   app.use('/api/sites', siteRouter({ sites }));
+  // Before the workday router, whose '/:id' would otherwise catch '<id>.ics'.
+  app.use('/api', calendarRouter({ calendar, optOut, appUrl: config.APP_URL }));
+  app.use('/api', crewRouter({ signups, roster, attendance, workdays }));
   app.use('/api/workdays', workdayRouter({ workdays }));
+  app.use('/api/waiver', waiverRouter({ waivers }));
+  app.use('/api/me', meRouter({ me }));
   app.use('/api/users', userRouter({ users }));
   app.use('/api/volunteers', volunteerRouter({ users }));
   app.use('/api', apiNotFound);

@@ -2,6 +2,7 @@ import type { Server } from 'node:http';
 import type { Config } from './config.js';
 import { createSmtpMailer } from './adapters/email.js';
 import { createApp } from './app.js';
+import { startBackground } from './background.js';
 import { createDataSource } from './db/data-source.js';
 
 export interface RunningServer {
@@ -16,7 +17,8 @@ export async function runServer(opts: { config: Config; clientDir?: string; log?
   const db = await createDataSource(config.DATABASE_URL).initialize();
   await db.runMigrations({ transaction: 'each' });
   const mailer = createSmtpMailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM });
-  const built = createApp({ config, db, mailer, log, clientDir: opts.clientDir });
+  const background = await startBackground({ config, db, mailer, log });
+  const built = createApp({ config, db, mailer, log, clientDir: opts.clientDir, notifier: background.notifier });
   const server: Server = await new Promise((resolve, reject) => {
     const s = built.app.listen(config.PORT, config.HOST, () => resolve(s));
     s.once('error', reject);
@@ -27,6 +29,7 @@ export async function runServer(opts: { config: Config; clientDir?: string; log?
       server.closeAllConnections();
       await new Promise<void>((resolve) => server.close(() => resolve()));
       await built.close();
+      await background.stop();
       mailer.close();
       await db.destroy();
     },

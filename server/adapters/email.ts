@@ -21,6 +21,10 @@ export function createSmtpMailer(opts: { host: string; port: number; from: strin
     port: opts.port,
     secure: false,
     ignoreTLS: opts.host === '127.0.0.1' || opts.host === 'localhost',
+    // nodemailer waits minutes by default; a hung server should fail the send so it is retried.
+    connectionTimeout: 15_000,
+    greetingTimeout: 15_000,
+    socketTimeout: 60_000,
   });
   return {
     async send(mail) {

@@ -1,17 +1,9 @@
 /** Texts of the account e-mails; pure so they can be checked without sending anything. */
-export interface MailContent {
-  subject: string;
-  text: string;
-  html: string;
-}
+import { mailLayout, type MailContent, type MailLink } from './mail-layout.js';
 
-const escapeHtml = (s: string) =>
-  s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c] ?? c);
+export type { MailContent } from './mail-layout.js';
 
-function layout(greeting: string, lines: string[], link: { href: string; label: string }): string {
-  const body = lines.map((l) => `<p>${escapeHtml(l)}</p>`).join('');
-  return `<div style="font-family:Nunito,Arial,sans-serif;color:#1d2b24"><p>${escapeHtml(greeting)}</p>${body}<p><a href="${escapeHtml(link.href)}" style="color:#1F5E46;font-weight:700">${escapeHtml(link.label)}</a></p><p style="color:#555">Ebbroot</p></div>`;
-}
+const layout = (greeting: string, lines: string[], link: MailLink) => mailLayout({ greeting, lines, link });
 
 export function passwordResetMail(name: string, link: string, validMinutes: number): MailContent {
   const lines = [

@@ -14,6 +14,7 @@ const badState = (message: string) => new AppError(409, 'conflict', message);
 
 /** Fields whose change the crew must hear about (and calendars must show). */
 const NOTIFY_FIELDS = ['startsAt', 'endsAt', 'meetingPoint', 'siteId'] as const;
+const FIELD_WORDS: Record<(typeof NOTIFY_FIELDS)[number], string> = { startsAt: 'start time', endsAt: 'finish time', meetingPoint: 'meeting point', siteId: 'site' };
 
 export function createWorkdayService(deps: { db: DataSource; sites: SiteService; notifier: CrewNotifier }) {
   const repo = deps.db.getRepository(Workday);
@@ -78,7 +79,7 @@ export function createWorkdayService(deps: { db: DataSource; sites: SiteService;
           if (roles.length) await tx.getRepository(WorkdayRole).insert(roles.map((r) => ({ ...r, workdayId: id })));
         }
         await promoteFromWaitlist(tx, w, deps.notifier);
-        if (changed.length > 0 && w.status === 'published') await deps.notifier.workdayChanged(tx, id, `Changed: ${changed.join(', ')}`);
+        if (changed.length > 0 && w.status === 'published') await deps.notifier.workdayChanged(tx, id, `The ${changed.map((f) => FIELD_WORDS[f]).join(' and ')} changed.`);
         return w;
       });
       await deps.notifier.flush();

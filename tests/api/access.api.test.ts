@@ -18,6 +18,9 @@ const ALL_OK = { anon: 200, volunteer: 200, coordinator: 200, admin: 200 };
 const SIGNED_IN = { anon: 401, volunteer: 200, coordinator: 200, admin: 200 };
 const STAFF = { anon: 401, volunteer: 403, coordinator: 200, admin: 200 };
 const ADMIN = { anon: 401, volunteer: 403, coordinator: 403, admin: 200 };
+const ALL_404 = { anon: 404, volunteer: 404, coordinator: 404, admin: 404 };
+const SIGNED_IN_404 = { anon: 401, volunteer: 404, coordinator: 404, admin: 404 };
+const STAFF_404 = { anon: 401, volunteer: 403, coordinator: 404, admin: 404 };
 const NOBODY_USER = '00000000-0000-4000-8000-000000000000';
 const NO_ID = NOBODY_USER;
 const SH = encodeURIComponent('noaa/8726738');
@@ -43,11 +46,39 @@ const routes: RouteCase[] = [
   { method: 'get', path: `/api/sites/${NO_ID}/tide?from=2026-01-01&to=2026-01-02`, expect: { ...SIGNED_IN, volunteer: 404, coordinator: 404, admin: 404 } },
   { method: 'get', path: `/api/sites/${NO_ID}/windows?from=2026-01-01&to=2026-01-02`, expect: { ...SIGNED_IN, volunteer: 404, coordinator: 404, admin: 404 } },
   { method: 'get', path: '/api/windows?from=2026-01-01&to=2026-01-02', expect: SIGNED_IN },
-  { method: 'get', path: '/api/workdays', expect: STAFF },
+  { method: 'get', path: '/api/workdays', expect: ALL_OK },
+  { method: 'get', path: `/api/workdays/${NO_ID}`, expect: ALL_404 },
   { method: 'post', path: '/api/workdays', body: {}, expect: { ...STAFF, coordinator: 400, admin: 400 } },
+  { method: 'patch', path: `/api/workdays/${NO_ID}`, body: {}, expect: STAFF_404 },
+  { method: 'post', path: `/api/workdays/${NO_ID}/publish`, expect: STAFF_404 },
+  { method: 'post', path: `/api/workdays/${NO_ID}/cancel`, body: { message: 'Weather' }, expect: STAFF_404 },
+  { method: 'post', path: `/api/workdays/${NO_ID}/complete`, expect: STAFF_404 },
+  { method: 'post', path: `/api/workdays/${NO_ID}/signups`, body: {}, expect: { ...SIGNED_IN, volunteer: 400, coordinator: 400, admin: 400 } },
+  { method: 'get', path: `/api/workdays/${NO_ID}/signups/mine`, expect: SIGNED_IN_404 },
+  { method: 'delete', path: `/api/workdays/${NO_ID}/signups/mine`, expect: SIGNED_IN_404 },
+  { method: 'get', path: `/api/workdays/${NO_ID}/crew`, expect: SIGNED_IN_404 },
+  { method: 'get', path: `/api/workdays/${NO_ID}/roster`, expect: STAFF_404 },
+  { method: 'post', path: `/api/signups/${NO_ID}/check-in`, body: {}, expect: STAFF_404 },
+  { method: 'post', path: `/api/signups/${NO_ID}/check-out`, body: {}, expect: STAFF_404 },
+  { method: 'post', path: `/api/signups/${NO_ID}/no-show`, expect: STAFF_404 },
+  { method: 'put', path: `/api/signups/${NO_ID}/hours`, body: { minutes: 60, reason: 'Corrected' }, expect: STAFF_404 },
+  { method: 'get', path: '/api/waiver', expect: ALL_OK },
+  { method: 'post', path: '/api/waiver', body: {}, expect: { ...ADMIN, admin: 400 } },
+  { method: 'get', path: '/api/me/profile', expect: SIGNED_IN },
+  { method: 'patch', path: '/api/me/profile', body: {}, expect: SIGNED_IN },
+  { method: 'get', path: '/api/me/workdays', expect: SIGNED_IN },
+  { method: 'get', path: '/api/me/hours', expect: SIGNED_IN },
   { method: 'get', path: '/api/users', expect: ADMIN },
   { method: 'patch', path: `/api/users/${NOBODY_USER}/role`, body: { role: 'volunteer' }, expect: { ...ADMIN, admin: 404 } },
   { method: 'get', path: '/api/volunteers', expect: STAFF },
+  { method: 'get', path: `/api/workdays/${NO_ID}.ics`, expect: ALL_404 },
+  { method: 'get', path: `/api/calendar/workdays/${NO_ID}.ics`, expect: ALL_404 },
+  { method: 'get', path: '/api/calendar/organisation.ics', expect: ALL_OK },
+  { method: 'get', path: `/api/calendar/personal/${'A'.repeat(43)}.ics`, expect: ALL_404 },
+  { method: 'get', path: '/api/me/calendar-token', expect: SIGNED_IN },
+  { method: 'post', path: '/api/me/calendar-token', expect: SIGNED_IN },
+  { method: 'delete', path: '/api/me/calendar-token', expect: { ...SIGNED_IN, volunteer: 204, coordinator: 204, admin: 204 } },
+  { method: 'get', path: `/api/unsubscribe/reminders?u=${NOBODY_USER}&t=forged`, expect: { anon: 400, volunteer: 400, coordinator: 400, admin: 400 } },
 ];
 
 let t: TestApp;

@@ -5,6 +5,7 @@ import type { DataSource } from 'typeorm';
 import type { Role } from '../../shared/schemas/user.schema.js';
 import { createSmtpMailer } from '../../server/adapters/email.js';
 import { createApp } from '../../server/app.js';
+import { startBackground, type Background } from '../../server/background.js';
 import { loadConfig, type Config } from '../../server/config.js';
 import { createDataSource } from '../../server/db/data-source.js';
 import { buildUser, TEST_PASSWORD } from '../factories/user.factory.js';
@@ -13,6 +14,8 @@ export interface TestApp {
   app: Express;
   db: DataSource;
   config: Config;
+  /** The job queue side: outbox sender, sweeper, reminders. */
+  background: Background;
   close(): Promise<void>;
 }
 
@@ -20,13 +23,16 @@ export async function createTestApp(opts: { clock?: () => Date } = {}): Promise<
   const config = loadConfig();
   const db = await createDataSource(config.DATABASE_URL).initialize();
   const mailer = createSmtpMailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM });
-  const built = createApp({ config, db, mailer, clock: opts.clock, log: () => undefined });
+  const background = await startBackground({ config, db, mailer, clock: opts.clock, log: () => undefined });
+  const built = createApp({ config, db, mailer, clock: opts.clock, log: () => undefined, notifier: background.notifier });
   return {
     app: built.app,
     db,
     config,
+    background,
     async close() {
       await built.close();
+      await background.stop();
       mailer.close();
       await db.destroy();
     },
@@ -54,5 +60,5 @@ export async function authAgentFor(t: TestApp, role: Role) {
 /** Messages the SMTP fake received for an address, newest first. */
 export async function mailTo(config: Config, address: string) {
   const res = await fetch(`${config.MAIL_INSPECT_URL}/messages?to=${encodeURIComponent(address)}`);
-  return (await res.json()) as { to: string[]; subject: string; text: string; html: string }[];
+  return (await res.json()) as { id: string; to: string[]; subject: string; text: string; html: string; attachments: string[] }[];
 }

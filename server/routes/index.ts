@@ -1,0 +1,35 @@
+/** Mounts every API router; order matters where paths overlap (noted inline). */
+import type { Express } from 'express';
+import type { DataSource } from 'typeorm';
+import type { PassportInstance } from '../adapters/google-auth.js';
+import type { Config } from '../config.js';
+import { apiNotFound } from '../middleware/error-handler.js';
+import type { Services } from '../services/index.js';
+import { authRouter } from './auth.router.js';
+import { calendarRouter } from './calendar.router.js';
+import { crewRouter } from './crew.router.js';
+import { healthRouter } from './health.router.js';
+import { meRouter } from './me.router.js';
+import { organisationRouter } from './organisation.router.js';
+import { siteRouter } from './site.router.js';
+import { tideRouter } from './tide.router.js';
+import { userRouter, volunteerRouter } from './user.router.js';
+import { waiverRouter } from './waiver.router.js';
+import { workdayRouter } from './workday.router.js';
+
+export function mountApi(app: Express, s: Services, deps: { db: DataSource; passport: PassportInstance; config: Config }): void {
+  app.use('/api/health', healthRouter({ db: deps.db }));
+  app.use('/api/auth', authRouter({ auth: s.auth, passport: deps.passport }));
+  app.use('/api/organisation', organisationRouter({ organisation: s.organisation }));
+  app.use('/api', tideRouter({ stations: s.stations, siteTide: s.siteTide, organisation: s.organisation }));
+  app.use('/api/sites', siteRouter({ sites: s.sites }));
+  // Before the workday router, whose '/:id' would otherwise catch '<id>.ics'.
+  app.use('/api', calendarRouter({ calendar: s.calendar, optOut: s.optOut, appUrl: deps.config.APP_URL }));
+  app.use('/api', crewRouter({ signups: s.signups, roster: s.roster, attendance: s.attendance, workdays: s.workdays }));
+  app.use('/api/workdays', workdayRouter({ workdays: s.workdays }));
+  app.use('/api/waiver', waiverRouter({ waivers: s.waivers }));
+  app.use('/api/me', meRouter({ me: s.me }));
+  app.use('/api/users', userRouter({ users: s.users }));
+  app.use('/api/volunteers', volunteerRouter({ users: s.users }));
+  app.use('/api', apiNotFound);
+}

@@ -1,0 +1,60 @@
+/** Wires every service from the app's dependencies (plain factories, no container). */
+import type { DataSource } from 'typeorm';
+import type { Mailer } from '../adapters/email.js';
+import { createTideStationDirectory, type TideStationDirectory } from '../adapters/tide-stations.js';
+import type { Config } from '../config.js';
+import { createAttendanceService } from './attendance.service.js';
+import { createAuthTokenService } from './auth-token.service.js';
+import { createAuthService } from './auth.service.js';
+import { createCalendarService } from './calendar.service.js';
+import type { CrewNotifier } from './crew-notifier.js';
+import { createMeService } from './me.service.js';
+import { createOrganisationService } from './organisation.service.js';
+import { createPasswordHasher } from './password-hasher.js';
+import { createReminderOptOutService } from './reminder-opt-out.service.js';
+import { createRosterService } from './roster.service.js';
+import { createSignupService } from './signup.service.js';
+import { createSiteTideService } from './site-tide.service.js';
+import { createSiteService } from './site.service.js';
+import { createStationService } from './station.service.js';
+import { createUserService } from './user.service.js';
+import { createWaiverService } from './waiver.service.js';
+import { createWorkdayService } from './workday.service.js';
+
+export interface ServiceDeps {
+  config: Config;
+  db: DataSource;
+  mailer: Mailer;
+  notifier: CrewNotifier;
+  clock: () => Date;
+  log: (line: string) => void;
+  tideStations?: TideStationDirectory;
+}
+
+export function createServices(deps: ServiceDeps) {
+  const { config, db, notifier, clock } = deps;
+  const users = createUserService({ db });
+  const organisation = createOrganisationService({ db });
+  const stations = createStationService({ stations: deps.tideStations ?? createTideStationDirectory() });
+  const sites = createSiteService({ db, stations });
+  const waivers = createWaiverService({ db });
+  const tokens = createAuthTokenService({ db, clock });
+  const hasher = createPasswordHasher(config.PASSWORD_SCRYPT_LOG_N);
+  return {
+    users,
+    organisation,
+    stations,
+    sites,
+    waivers,
+    auth: createAuthService({ db, hasher, tokens, mailer: deps.mailer, appUrl: config.APP_URL, clock, log: deps.log }),
+    siteTide: createSiteTideService({ sites, stations, organisation }),
+    workdays: createWorkdayService({ db, sites, notifier }),
+    signups: createSignupService({ db, sites, waivers, notifier, clock }),
+    roster: createRosterService({ db }),
+    attendance: createAttendanceService({ db, clock }),
+    me: createMeService({ db }),
+    calendar: createCalendarService({ db, appUrl: config.APP_URL, clock }),
+    optOut: createReminderOptOutService({ db, secret: config.SESSION_SECRET }),
+  };
+}
+export type Services = ReturnType<typeof createServices>;

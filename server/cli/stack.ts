@@ -8,6 +8,7 @@ import { startFakes, type RunningFakes } from '../../fakes/index.js';
 import type { Config } from '../config.js';
 import { createDataSource } from '../db/data-source.js';
 import { seedDemo } from '../db/seeds/demo.seed.js';
+import { createTideStationDirectory } from '../adapters/tide-stations.js';
 import { createPasswordHasher } from '../services/password-hasher.js';
 import { ensureDatabase, startLocalPostgres, type LocalPostgres } from './postgres.js';
 
@@ -33,8 +34,8 @@ export async function startLocalStack(config: Config, log: (s: string) => void, 
     try {
       const ran = await db.runMigrations({ transaction: 'each' });
       if (ran.length > 0) log(`Ran ${ran.length} migration(s)`);
-      const seeded = await seedDemo({ db, hasher: createPasswordHasher(config.PASSWORD_SCRYPT_LOG_N), now: new Date() });
-      log(seeded.created > 0 ? `Seeded the demo organisation (${seeded.created} people)` : 'Demo data already present');
+      const seeded = await seedDemo({ db, hasher: createPasswordHasher(config.PASSWORD_SCRYPT_LOG_N), now: new Date(), stations: createTideStationDirectory() });
+      log(seeded.created + seeded.workdays > 0 ? `Seeded the demo organisation (${seeded.created} people, ${seeded.workdays} workdays)` : 'Demo data already present');
     } finally {
       await db.destroy();
     }

@@ -10,10 +10,17 @@ import { VolunteerProfile } from './entities/volunteer-profile.entity.js';
 import { WaiverVersion } from './entities/waiver-version.entity.js';
 import { AuditLog } from './entities/audit-log.entity.js';
 import { OutboxMessage } from './entities/outbox-message.entity.js';
+import { Photo } from './entities/photo.entity.js';
+import { CollectionBatch } from './entities/collection-batch.entity.js';
+import { Tank } from './entities/tank.entity.js';
+import { SalinityReading } from './entities/salinity-reading.entity.js';
+import { Tree } from './entities/tree.entity.js';
+import { TreeEvent } from './entities/tree-event.entity.js';
 import { User } from './entities/user.entity.js';
 import { migrations } from './migrations/index.js';
 
-export const entities = [User, AuthToken, Organisation, Site, Workday, WorkdayRole, Signup, VolunteerProfile, WaiverVersion, AuditLog, OutboxMessage];
+export const entities = [User, AuthToken, Organisation, Site, Workday, WorkdayRole, Signup, VolunteerProfile, WaiverVersion, AuditLog, OutboxMessage,
+  Photo, CollectionBatch, Tank, SalinityReading, Tree, TreeEvent];
 
 /** One DataSource per process; migrations run explicitly at start, never synchronize. */
 export function createDataSource(url: string): DataSource {

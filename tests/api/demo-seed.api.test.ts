@@ -6,6 +6,8 @@ import { DEMO_PASSWORD, demoPeople } from '../../server/db/seeds/demo-people.js'
 import { demoSites } from '../../server/db/seeds/demo-sites.js';
 import { seedDemo } from '../../server/db/seeds/demo.seed.js';
 import { createPasswordHasher } from '../../server/services/password-hasher.js';
+import { createTideStationDirectory } from '../../server/adapters/tide-stations.js';
+import { Workday } from '../../server/db/entities/workday.entity.js';
 import { createTestApp, csrfAgent, type TestApp } from '../setup/test-app.js';
 
 let t: TestApp;
@@ -18,11 +20,15 @@ describe('demo seed', () => {
   it('seeds the demo organisation once; a second run adds nothing', async () => {
     const hasher = createPasswordHasher(10);
     const now = new Date('2026-12-01T12:00:00Z');
-    await seedDemo({ db: t.db, hasher, now });
+    const stations = createTideStationDirectory();
+    const first = await seedDemo({ db: t.db, hasher, now, stations });
+    expect(first.workdays).toBe(4);
+    const workdays = await t.db.getRepository(Workday).count();
     const users = await t.db.getRepository(User).count();
     const sites = await t.db.getRepository(Site).count();
-    const second = await seedDemo({ db: t.db, hasher, now });
-    expect(second.created).toBe(0);
+    const second = await seedDemo({ db: t.db, hasher, now, stations });
+    expect(second).toEqual({ created: 0, workdays: 0 });
+    expect(await t.db.getRepository(Workday).count()).toBe(workdays);
     expect(await t.db.getRepository(User).count()).toBe(users);
     expect(await t.db.getRepository(Site).count()).toBe(sites);
     for (const s of demoSites) expect(await t.db.getRepository(Site).countBy({ name: s.name })).toBe(1);

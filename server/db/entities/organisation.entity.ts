@@ -1,4 +1,5 @@
 import { Check, Column, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
+import type { NurseryRules } from '../../../shared/schemas/nursery.schema.js';
 import type { LengthUnit, WindowWeights } from '../../../shared/schemas/organisation.schema.js';
 
 /** The one organisation an instance serves (single row, id 1). */
@@ -30,6 +31,10 @@ export class Organisation {
   /** How low-water windows are ranked (see server/domain/tide/window-ranking.ts); default written as PostgreSQL prints jsonb. */
   @Column({ type: 'jsonb', name: 'window_weights', default: () => `'{"weekend": 0.25, "duration": 0.4, "lowWater": 0.2, "startHour": 0.15}'` })
   windowWeights: WindowWeights;
+
+  /** How tree readiness for a site is judged (see server/domain/nursery/readiness.ts). */
+  @Column({ type: 'jsonb', name: 'nursery_rules', default: () => `'{"holdDays": 21, "crownRule": "mhhw", "salinityTolerancePpt": 2, "maxCrownSubmergedShare": 0.02}'` })
+  nurseryRules: NurseryRules;
 
   /** Marks seeded demo data, so the interface can say so plainly. */
   @Column({ type: 'boolean', name: 'is_demo', default: false })

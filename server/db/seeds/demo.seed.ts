@@ -1,22 +1,30 @@
 import type { DataSource } from 'typeorm';
+import type { TideStationDirectory } from '../../adapters/tide-stations.js';
 import type { PasswordHasher } from '../../services/password-hasher.js';
 import { Organisation } from '../entities/organisation.entity.js';
 import { Site } from '../entities/site.entity.js';
 import { User } from '../entities/user.entity.js';
 import { DEMO_PASSWORD, demoPeople } from './demo-people.js';
 import { demoSites } from './demo-sites.js';
+import { seedDemoWorkdays } from './demo-workdays.js';
 
 /**
  * Seeds the demo organisation once: rows are inserted only when missing (by e-mail), so a
  * second start adds nothing. All demo people share one password hash, computed once.
  */
-export async function seedDemo(deps: { db: DataSource; hasher: PasswordHasher; now: Date }): Promise<{ created: number }> {
+export async function seedDemo(deps: { db: DataSource; hasher: PasswordHasher; now: Date; stations?: TideStationDirectory }): Promise<{ created: number; workdays: number }> {
   await seedDemoOrganisation(deps.db);
   await deps.db.getRepository(Site).createQueryBuilder().insert().values(demoSites).orIgnore().execute();
+  const created = await seedDemoPeople(deps);
+  const workdays = deps.stations ? await seedDemoWorkdays({ db: deps.db, stations: deps.stations, now: deps.now }) : 0;
+  return { created, workdays };
+}
+
+async function seedDemoPeople(deps: { db: DataSource; hasher: PasswordHasher; now: Date }): Promise<number> {
   const repo = deps.db.getRepository(User);
   const existing = new Set((await repo.find({ select: { email: true } })).map((u) => u.email));
   const missing = demoPeople.filter((p) => !existing.has(p.email));
-  if (missing.length === 0) return { created: 0 };
+  if (missing.length === 0) return 0;
   const passwordHash = await deps.hasher.hash(DEMO_PASSWORD);
   const rows = missing.map((p) => ({
     name: p.name,
@@ -26,7 +34,7 @@ export async function seedDemo(deps: { db: DataSource; hasher: PasswordHasher; n
     emailVerifiedAt: p.verified ? deps.now : null,
   }));
   await repo.createQueryBuilder().insert().values(rows).orIgnore().execute();
-  return { created: missing.length };
+  return missing.length;
 }
 
 /** Names the organisation after the demo scenario, once: only while it still has the default name. */

@@ -6,7 +6,7 @@ import { computeTidalDatums, TIDAL_DAY_MS } from '../tide/datums.js';
 import { seriesEnd } from '../tide/series.js';
 import { shareSubmerged } from '../tide/submergence.js';
 import type { LevelSeries, TideExtreme } from '../tide/types.js';
-import { NurseryInputError } from './errors.js';
+import { NurseryInputError, requireRange } from './errors.js';
 
 /**
  * The site's predicted tide over the coming year, in metres above the station's MLLW with the
@@ -15,6 +15,13 @@ import { NurseryInputError } from './errors.js';
 export interface SiteTide {
   series: LevelSeries;
   extremes: readonly TideExtreme[];
+  /** The series' MHHW and MSL, when already computed (`siteTideDatums`), to reuse across trees. */
+  datums?: SiteTideDatums;
+}
+
+export interface SiteTideDatums {
+  mhhwM: number;
+  mslM: number;
 }
 
 /**
@@ -37,8 +44,12 @@ export interface CrownClearance {
   mslM: number;
 }
 
-/** MHHW and MSL of the series' whole tidal days. */
-function yearDatums(tide: SiteTide): { mhhwM: number; mslM: number } {
+/**
+ * MHHW and MSL of the series' whole tidal days (NOAA's definitions via the tide domain's
+ * `computeTidalDatums`). Over one year these differ from the 19-year epoch's by the nodal cycle.
+ * @example const tide = { series, extremes }; const withDatums = { ...tide, datums: siteTideDatums(tide) };
+ */
+export function siteTideDatums(tide: SiteTide): SiteTideDatums {
   const fromMs = tide.series.startMs;
   const toMs = seriesEnd(tide.series);
   if (toMs - fromMs < TIDAL_DAY_MS) throw new NurseryInputError('tide', 'The tide series must cover at least one tidal day (use a year).');
@@ -76,9 +87,12 @@ export function crownClearance(input: {
   threshold: CrownThreshold;
 }): CrownClearance {
   const { tide, threshold } = input;
+  requireRange('heightCm', input.heightCm, 0, 1000, 'cm');
+  requireRange('potHeightCm', input.potHeightCm, 0, 300, 'cm');
+  if (threshold.kind === 'share') requireRange('maxShare', threshold.maxShare, 0, 1);
   const collarM = input.bedElevationM + input.potHeightCm / 100;
   const topM = collarM + input.heightCm / 100;
-  const { mhhwM, mslM } = yearDatums(tide);
+  const { mhhwM, mslM } = tide.datums ?? siteTideDatums(tide);
   const crownSubmergedShare = shareSubmerged(tide.series, topM);
   const requiredTopM = threshold.kind === 'mhhw' ? mhhwM : elevationForShare(tide.series, threshold.maxShare);
   const pass = threshold.kind === 'mhhw' ? topM >= mhhwM : crownSubmergedShare <= threshold.maxShare;

@@ -4,13 +4,11 @@
  * (c) stage and health. Cautions never block: (d) root collar flooded more than the published
  * guidance, and a bed below mean sea level.
  */
-import { crownClearance, type CrownThreshold, type SiteTide } from './crown-clearance.js';
+import type { NurseryRules, TreeStage } from '../../../shared/schemas/nursery.schema.js';
+import { crownClearance, type CrownClearance, type CrownThreshold, type SiteTide } from './crown-clearance.js';
 import { formatMetres, formatPpt, formatShare } from './format.js';
 import { salinityHold, type SalinityReading } from './salinity-hold.js';
 
-/** Tree stages in order (DESIGN.md vocabulary). */
-export const TREE_STAGES = ['collected', 'tube', 'potted', 'brining', 'ready', 'planted', 'alive', 'lost'] as const;
-export type TreeStage = (typeof TREE_STAGES)[number];
 
 /** Stages from which a tree may go out to a site. */
 export const PLANTABLE_STAGES: readonly TreeStage[] = ['brining', 'ready'];
@@ -20,12 +18,32 @@ export const PLANTABLE_STAGES: readonly TreeStage[] = ['brining', 'ready'];
  * Lewis 2005 (Ecol. Eng. 24:403–418) — established mangroves flood no more than about 30% of the
  * time (TRADE.md §3 [PUB]).
  */
-export const READINESS_DEFAULTS = {
-  crownThreshold: { kind: 'mhhw' } satisfies CrownThreshold,
+export const READINESS_DEFAULTS: Readonly<ReadinessSettings> = {
+  crownThreshold: { kind: 'mhhw' },
   tolerancePpt: 2,
   requiredDays: 21,
   collarCautionShare: 0.3,
 };
+
+/** Readiness settings (the organisation's, or the defaults). */
+export interface ReadinessSettings {
+  crownThreshold: CrownThreshold;
+  /** ± ppt around the site's salinity that counts as held. */
+  tolerancePpt: number;
+  /** Days the hold must last. */
+  requiredDays: number;
+  /** Share of time above which a flooded root collar earns a caution. */
+  collarCautionShare: number;
+}
+
+/**
+ * Readiness settings from the organisation's stored nursery rules.
+ * @example readinessSettingsFrom(DEFAULT_NURSERY_RULES) // { crownThreshold: { kind: 'mhhw' }, tolerancePpt: 2, requiredDays: 21 }
+ */
+export function readinessSettingsFrom(rules: NurseryRules): Partial<ReadinessSettings> {
+  const crownThreshold: CrownThreshold = rules.crownRule === 'share' ? { kind: 'share', maxShare: rules.maxCrownSubmergedShare } : { kind: 'mhhw' };
+  return { crownThreshold, tolerancePpt: rules.salinityTolerancePpt, requiredDays: rules.holdDays };
+}
 
 export interface ReadinessInput {
   tree: { stage: TreeStage; heightCm: number; potHeightCm: number; /** From the latest health note; absent = no note. */ healthy?: boolean };
@@ -34,7 +52,7 @@ export interface ReadinessInput {
   tide: SiteTide;
   salinityReadings: readonly SalinityReading[];
   today: string;
-  settings?: Partial<typeof READINESS_DEFAULTS> & { crownThreshold?: CrownThreshold };
+  settings?: Partial<ReadinessSettings>;
 }
 
 export type ReasonCode = 'crown_submerged' | 'salinity_unknown' | 'salinity_off' | 'salinity_hold' | 'stage' | 'unhealthy';
@@ -54,10 +72,9 @@ export interface Readiness {
   mslM: number;
 }
 
-type Settings = typeof READINESS_DEFAULTS & { crownThreshold: CrownThreshold };
 type Reason = Readiness['reasons'][number];
 
-function crownMessage(c: ReturnType<typeof crownClearance>, threshold: CrownThreshold): string {
+function crownMessage(c: CrownClearance, threshold: CrownThreshold): string {
   const detail =
     threshold.kind === 'mhhw'
       ? `its top is ${formatMetres(c.topM)} above MLLW, under MHHW (${formatMetres(c.mhhwM)})`
@@ -65,7 +82,7 @@ function crownMessage(c: ReturnType<typeof crownClearance>, threshold: CrownThre
   return `Needs ${c.shortfallCm} cm more height: ${detail}.`;
 }
 
-function salinityReason(input: ReadinessInput, s: Settings): { reason?: Reason; heldDays: number } {
+function salinityReason(input: ReadinessInput, s: ReadinessSettings): { reason?: Reason; heldDays: number } {
   const site = input.site.salinityPpt;
   const hold = salinityHold(input.salinityReadings, site, s.tolerancePpt, input.today);
   if (hold.latestPpt === null) return { heldDays: 0, reason: { code: 'salinity_unknown', message: `No salinity reading for its tank yet; site is ${formatPpt(site)}.` } };
@@ -83,7 +100,7 @@ function stageAndHealth(tree: ReadinessInput['tree']): Reason[] {
   return out;
 }
 
-function cautionsFor(c: ReturnType<typeof crownClearance>, bedM: number, s: Settings): Readiness['cautions'] {
+function cautionsFor(c: CrownClearance, bedM: number, s: ReadinessSettings): Readiness['cautions'] {
   const out: Readiness['cautions'] = [];
   if (c.collarFloodedShare > s.collarCautionShare) {
     const message = `Its root collar would be flooded ${formatShare(c.collarFloodedShare)} of the time; established mangroves flood no more than about ${formatShare(s.collarCautionShare)} of the time (Lewis 2005).`;
@@ -102,7 +119,14 @@ function cautionsFor(c: ReturnType<typeof crownClearance>, bedM: number, s: Sett
  *   // { ready: false, reasons: [{ code: 'crown_submerged', message: 'Needs 14 cm more height: …' }], … }
  */
 export function treeReadiness(input: ReadinessInput): Readiness {
-  const s: Settings = { ...READINESS_DEFAULTS, ...input.settings };
+  const d = READINESS_DEFAULTS;
+  const o = input.settings ?? {};
+  const s: ReadinessSettings = {
+    crownThreshold: o.crownThreshold ?? d.crownThreshold,
+    tolerancePpt: o.tolerancePpt ?? d.tolerancePpt,
+    requiredDays: o.requiredDays ?? d.requiredDays,
+    collarCautionShare: o.collarCautionShare ?? d.collarCautionShare,
+  };
   const { tree, site } = input;
   const crown = crownClearance({ ...tree, bedElevationM: site.bedElevationM, tide: input.tide, threshold: s.crownThreshold });
   const reasons: Reason[] = [];

@@ -95,7 +95,7 @@ export function salinityFromSpecificGravity(specificGravity: number, temperature
     );
   }
   let lo = 0;
-  let hi = maxS;
+  let hi: number = maxS;
   for (let i = 0; i < 60; i++) {
     const mid = (lo + hi) / 2;
     if (specificGravityFromSalinity(mid, temperatureC) < specificGravity) lo = mid;

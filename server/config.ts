@@ -23,6 +23,8 @@ const Config = z.object({
   /** scrypt cost as log2(N); 17 is OWASP's recommendation, tests lower it for speed. */
   PASSWORD_SCRYPT_LOG_N: z.coerce.number().int().min(10).max(20).default(17),
   LOG_REQUESTS: z.enum(['true', 'false']).default('true'),
+  /** Uploaded photos; outside the web root (relative paths are from the working directory). */
+  UPLOADS_DIR: z.string().min(1).default('.data/uploads'),
 });
 export type Config = z.infer<typeof Config>;
 

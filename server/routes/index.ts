@@ -10,9 +10,13 @@ import { calendarRouter } from './calendar.router.js';
 import { crewRouter } from './crew.router.js';
 import { healthRouter } from './health.router.js';
 import { meRouter } from './me.router.js';
+import { nurseryRouter } from './nursery.router.js';
 import { organisationRouter } from './organisation.router.js';
+import { photoRouter } from './photo.router.js';
 import { siteRouter } from './site.router.js';
+import { tankRouter } from './tank.router.js';
 import { tideRouter } from './tide.router.js';
+import { treeRouter } from './tree.router.js';
 import { userRouter, volunteerRouter } from './user.router.js';
 import { waiverRouter } from './waiver.router.js';
 import { workdayRouter } from './workday.router.js';
@@ -31,5 +35,9 @@ export function mountApi(app: Express, s: Services, deps: { db: DataSource; pass
   app.use('/api/me', meRouter({ me: s.me }));
   app.use('/api/users', userRouter({ users: s.users }));
   app.use('/api/volunteers', volunteerRouter({ users: s.users }));
+  app.use('/api', treeRouter({ batches: s.batches, trees: s.trees, bulk: s.treeBulk, labels: s.treeLabels }));
+  app.use('/api', tankRouter({ tanks: s.tanks, brining: s.brining, bulk: s.treeBulk }));
+  app.use('/api', nurseryRouter({ readiness: s.readiness, reservations: s.reservations }));
+  app.use('/api/photos', photoRouter({ photos: s.photos }));
   app.use('/api', apiNotFound);
 }

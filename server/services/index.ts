@@ -1,6 +1,7 @@
 /** Wires every service from the app's dependencies (plain factories, no container). */
 import type { DataSource } from 'typeorm';
 import type { Mailer } from '../adapters/email.js';
+import { createPhotoStore } from '../adapters/photo-store.js';
 import { createTideStationDirectory, type TideStationDirectory } from '../adapters/tide-stations.js';
 import type { Config } from '../config.js';
 import { createAttendanceService } from './attendance.service.js';
@@ -11,12 +12,21 @@ import type { CrewNotifier } from './crew-notifier.js';
 import { createMeService } from './me.service.js';
 import { createOrganisationService } from './organisation.service.js';
 import { createPasswordHasher } from './password-hasher.js';
+import { createPhotoService } from './photo.service.js';
+import { createReadinessService } from './readiness.service.js';
 import { createReminderOptOutService } from './reminder-opt-out.service.js';
 import { createRosterService } from './roster.service.js';
 import { createSignupService } from './signup.service.js';
 import { createSiteTideService } from './site-tide.service.js';
 import { createSiteService } from './site.service.js';
 import { createStationService } from './station.service.js';
+import { createTankBriningService } from './tank-brining.service.js';
+import { createTankService } from './tank.service.js';
+import { createTreeBatchService } from './tree-batch.service.js';
+import { createTreeBulkService } from './tree-bulk.service.js';
+import { createTreeLabelService } from './tree-labels.service.js';
+import { createTreeReservationService } from './tree-reservation.service.js';
+import { createTreeService } from './tree.service.js';
 import { createUserService } from './user.service.js';
 import { createWaiverService } from './waiver.service.js';
 import { createWorkdayService } from './workday.service.js';
@@ -40,6 +50,7 @@ export function createServices(deps: ServiceDeps) {
   const waivers = createWaiverService({ db });
   const tokens = createAuthTokenService({ db, clock });
   const hasher = createPasswordHasher(config.PASSWORD_SCRYPT_LOG_N);
+  const photos = createPhotoService({ db, store: createPhotoStore(config.UPLOADS_DIR) });
   return {
     users,
     organisation,
@@ -55,6 +66,15 @@ export function createServices(deps: ServiceDeps) {
     me: createMeService({ db }),
     calendar: createCalendarService({ db, appUrl: config.APP_URL, clock }),
     optOut: createReminderOptOutService({ db, secret: config.SESSION_SECRET }),
+    photos,
+    batches: createTreeBatchService({ db, clock, photos }),
+    trees: createTreeService({ db, clock, photos }),
+    treeBulk: createTreeBulkService({ db, clock }),
+    treeLabels: createTreeLabelService({ db, appUrl: config.APP_URL }),
+    reservations: createTreeReservationService({ db, clock }),
+    tanks: createTankService({ db, clock }),
+    brining: createTankBriningService({ db, clock }),
+    readiness: createReadinessService({ db, clock, sites, stations }),
   };
 }
 export type Services = ReturnType<typeof createServices>;

@@ -11,6 +11,7 @@ const toSettings = (o: Organisation): OrganisationSettings => ({
   taxId: o.taxId,
   contactEmail: o.contactEmail,
   windowWeights: o.windowWeights,
+  nurseryRules: o.nurseryRules,
 });
 
 export function createOrganisationService(deps: { db: DataSource }) {

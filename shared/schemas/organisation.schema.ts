@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { isTimeZone } from '../domain/time-zone.js';
+import { NurseryRules } from './nursery.schema.js';
 
 export const LengthUnit = z.enum(['ft', 'm']);
 export type LengthUnit = z.infer<typeof LengthUnit>;
@@ -27,6 +28,7 @@ export const OrganisationSettings = PublicOrganisation.extend({
   taxId: z.string(),
   contactEmail: z.string(),
   windowWeights: WindowWeights,
+  nurseryRules: NurseryRules,
 });
 export type OrganisationSettings = z.infer<typeof OrganisationSettings>;
 
@@ -39,6 +41,7 @@ export const UpdateOrganisationBody = z
     units: LengthUnit,
     timeZone: z.string().refine(isTimeZone, { message: 'must be an IANA time zone such as America/New_York' }),
     windowWeights: WindowWeights,
+    nurseryRules: NurseryRules,
   })
   .partial()
   .strict();

@@ -5,7 +5,8 @@ import { authAgentFor, createTestApp, type TestApp } from '../setup/test-app.js'
 
 let t: TestApp;
 beforeAll(async () => {
-  t = await createTestApp();
+  // Settings are organisation-wide: change them only in a database of this file's own.
+  t = await createTestApp({ ownDatabase: 'organisation' });
 });
 afterAll(() => t.close());
 
@@ -27,7 +28,21 @@ describe('PATCH /api/organisation/settings', () => {
     await agent.patch('/api/organisation/settings').set('X-CSRF-Token', token).send({ units: 'ft' }).expect(200);
   });
 
+  it('lets an admin set the readiness rules and the window weights', async () => {
+    const { agent, token } = await authAgentFor(t, 'admin');
+    const nurseryRules = { crownRule: 'share', maxCrownSubmergedShare: 0.05, salinityTolerancePpt: 3, holdDays: 28 };
+    const windowWeights = { duration: 0.5, lowWater: 0.1, weekend: 0.3, startHour: 0.1 };
+    const res = await agent.patch('/api/organisation/settings').set('X-CSRF-Token', token).send({ nurseryRules, windowWeights });
+    expect(res.status).toBe(200);
+    expect(res.body.settings).toMatchObject({ nurseryRules, windowWeights });
+    await agent.patch('/api/organisation/settings').set('X-CSRF-Token', token)
+      .send({ nurseryRules: { crownRule: 'mhhw', maxCrownSubmergedShare: 0.02, salinityTolerancePpt: 2, holdDays: 21 }, windowWeights: { duration: 0.4, lowWater: 0.2, weekend: 0.25, startHour: 0.15 } })
+      .expect(200);
+  });
+
   it.each([
+    [{ windowWeights: { duration: 0, lowWater: 0, weekend: 0, startHour: 0 } }, 'windowWeights'],
+    [{ nurseryRules: { crownRule: 'moon', maxCrownSubmergedShare: 0.02, salinityTolerancePpt: 2, holdDays: 21 } }, 'nurseryRules.crownRule'],
     [{ timeZone: 'Mars/Olympus' }, 'timeZone'],
     [{ units: 'fathoms' }, 'units'],
     [{ name: '' }, 'name'],

@@ -8,6 +8,8 @@ import { createApp } from '../../server/app.js';
 import { startBackground, type Background } from '../../server/background.js';
 import { loadConfig, type Config } from '../../server/config.js';
 import { createDataSource } from '../../server/db/data-source.js';
+import { dropDatabase, ensureDatabase } from '../../server/cli/postgres.js';
+import { TEST_PG_PORT } from './test-env.js';
 import { buildUser, TEST_PASSWORD } from '../factories/user.factory.js';
 
 export interface TestApp {
@@ -19,9 +21,17 @@ export interface TestApp {
   close(): Promise<void>;
 }
 
-export async function createTestApp(opts: { clock?: () => Date } = {}): Promise<TestApp> {
-  const config = loadConfig();
+/**
+ * `ownDatabase`: a fresh, migrated database for tests that change organisation-wide state
+ * (settings), so they cannot disturb test files running in parallel; dropped on close.
+ */
+export async function createTestApp(opts: { clock?: () => Date; ownDatabase?: string } = {}): Promise<TestApp> {
+  const shared = loadConfig();
+  const ownName = opts.ownDatabase ? `${new URL(shared.DATABASE_URL).pathname.slice(1)}_${opts.ownDatabase}` : undefined;
+  const config = ownName ? { ...shared, DATABASE_URL: `postgres://postgres@127.0.0.1:${TEST_PG_PORT}/${ownName}` } : shared;
+  if (ownName) await ensureDatabase(TEST_PG_PORT, ownName, true);
   const db = await createDataSource(config.DATABASE_URL).initialize();
+  if (ownName) await db.runMigrations({ transaction: 'each' });
   const mailer = createSmtpMailer({ host: config.SMTP_HOST, port: config.SMTP_PORT, from: config.MAIL_FROM });
   const background = await startBackground({ config, db, mailer, clock: opts.clock, log: () => undefined });
   const built = createApp({ config, db, mailer, clock: opts.clock, log: () => undefined, notifier: background.notifier });
@@ -35,6 +45,7 @@ export async function createTestApp(opts: { clock?: () => Date } = {}): Promise<
       await background.stop();
       mailer.close();
       await db.destroy();
+      if (ownName) await dropDatabase(TEST_PG_PORT, ownName);
     },
   };
 }

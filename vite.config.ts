@@ -47,6 +47,8 @@ export default defineConfig({
         test: {
           name: 'client',
           environment: 'happy-dom',
+          // Component tests render Element Plus; under a full parallel run a few take seconds.
+          testTimeout: 20_000,
           include: ['tests/client/**/*.test.ts'],
           setupFiles: ['tests/setup/client-setup.ts'],
           // Element Plus' on-demand style entries import .css files: let Vite (not Node) load them in tests.

@@ -42,14 +42,16 @@ function csrf(): Promise<string> {
 
 async function send(method: Method, path: string, body: unknown, token: string | null): Promise<Response> {
   const headers: Record<string, string> = { Accept: 'application/json' };
-  if (body !== undefined) headers['Content-Type'] = 'application/json';
+  // FormData sets its own multipart Content-Type with the boundary.
+  const form = body instanceof FormData;
+  if (body !== undefined && !form) headers['Content-Type'] = 'application/json';
   if (token !== null) headers['X-CSRF-Token'] = token;
   try {
     return await fetch(path, {
       method,
       headers,
       credentials: 'same-origin',
-      body: body === undefined ? undefined : JSON.stringify(body),
+      body: form ? body : body === undefined ? undefined : JSON.stringify(body),
     });
   } catch {
     throw new ApiError(0, 'service_unavailable', "Can't reach Ebbroot. Check your connection and try again.");
@@ -110,6 +112,11 @@ export function post<T>(path: string, body: unknown, schema: z.ZodType<T>): Prom
 export function post(path: string, body?: unknown): Promise<void>;
 export async function post<T>(path: string, body?: unknown, schema?: z.ZodType<T>): Promise<T | undefined> {
   return finish(await call('POST', path, body ?? {}), schema);
+}
+
+/** POST multipart/form-data (uploads), with the CSRF header like every other write. */
+export async function postForm<T>(path: string, form: FormData, schema: z.ZodType<T>): Promise<T> {
+  return parseBody(await call('POST', path, form), schema);
 }
 
 export function patch<T>(path: string, body: unknown, schema: z.ZodType<T>): Promise<T>;

@@ -1,6 +1,7 @@
 import { z } from 'zod';
-import { WorkdayKind } from '@shared/schemas/workday.schema';
-import { get, post, queryString } from './http';
+import type { CrewRole } from '@shared/schemas/crew.schema';
+import { WorkdayDto, WorkdayKind, type ListWorkdaysQuery, type UpdateWorkdayBody } from '@shared/schemas/workday.schema';
+import { get, patch, post, queryString } from './http';
 
 /**
  * The part of a workday the draft step shows. Parsed loosely (unknown keys dropped) so the richer
@@ -23,6 +24,13 @@ export interface CreateWorkdayBody {
   endsAt: string;
   title?: string;
   kind?: WorkdayKind;
+  capacity?: number;
+  roles?: { role: CrewRole; capacity: number }[];
+  description?: string;
+  meetingPoint?: string;
+  whatToBring?: string;
+  minimumAge?: number;
+  status?: 'draft' | 'published';
 }
 
 const WorkdayResponse = z.object({ workday: WorkdayDraft });
@@ -36,4 +44,41 @@ export async function createWorkday(body: CreateWorkdayBody): Promise<WorkdayDra
 /** Coordinators and admins: the draft workdays at one site. */
 export async function listDraftWorkdays(siteId: string): Promise<WorkdayDraft[]> {
   return (await get(`/api/workdays${queryString({ status: 'draft', siteId })}`, WorkdaysResponse)).workdays;
+}
+
+const WorkdayDtoResponse = z.object({ workday: WorkdayDto });
+const WorkdayDtosResponse = z.object({ workdays: z.array(WorkdayDto) });
+
+function workdayPath(id: string, action?: string): string {
+  return `/api/workdays/${encodeURIComponent(id)}${action ? `/${action}` : ''}`;
+}
+
+/** One workday with its places per role: anyone unless it is a draft (coordinators and admins). */
+export async function fetchWorkday(id: string): Promise<WorkdayDto> {
+  return (await get(workdayPath(id), WorkdayDtoResponse)).workday;
+}
+
+/** Workdays by start time; anyone sees published, cancelled and completed ones, staff also drafts. */
+export async function listWorkdays(query: ListWorkdaysQuery = {}): Promise<WorkdayDto[]> {
+  return (await get(`/api/workdays${queryString({ ...query })}`, WorkdayDtosResponse)).workdays;
+}
+
+/** Coordinators and admins; moving the time or place of a published workday e-mails the crew. */
+export async function updateWorkday(id: string, body: UpdateWorkdayBody): Promise<WorkdayDto> {
+  return (await patch(workdayPath(id), body, WorkdayDtoResponse)).workday;
+}
+
+/** Coordinators and admins; 409 `conflict` unless it is a draft. */
+export async function publishWorkday(id: string): Promise<WorkdayDto> {
+  return (await post(workdayPath(id, 'publish'), {}, WorkdayDtoResponse)).workday;
+}
+
+/** Coordinators and admins; everyone signed up gets `message` by e-mail. */
+export async function cancelWorkday(id: string, message: string): Promise<WorkdayDto> {
+  return (await post(workdayPath(id, 'cancel'), { message }, WorkdayDtoResponse)).workday;
+}
+
+/** Coordinators and admins; 409 `conflict` unless it is published. */
+export async function completeWorkday(id: string): Promise<WorkdayDto> {
+  return (await post(workdayPath(id, 'complete'), {}, WorkdayDtoResponse)).workday;
 }

@@ -38,8 +38,21 @@ export type AppRouteName =
   | 'site-edit'
   | 'site-tide'
   | 'window-calendar'
+  | 'nursery'
+  | 'nursery-tree'
   | 'account'
   | 'organisation-settings'
+  | 'waiver-admin'
+  | 'workday-admin-list'
+  | 'workday-new'
+  | 'workday-edit'
+  | 'workday-manage'
+  | 'workday-roster'
+  | 'workday-check-in'
+  | 'workday-calendar'
+  | 'workday'
+  | 'my-workdays'
+  | 'my-hours'
   | 'no-access'
   | 'not-found';
 
@@ -64,6 +77,48 @@ export const routes: AppRouteRecord[] = [
     component: () => import('@/views/OrganisationSettingsView.vue'),
     meta: { requiresAuth: true, roles: ['admin'], title: 'Organisation settings' },
   },
+  {
+    path: '/settings/waiver',
+    name: 'waiver-admin',
+    component: () => import('@/views/WaiverAdminView.vue'),
+    meta: { requiresAuth: true, roles: ['admin'], title: 'Waiver' },
+  },
+  {
+    path: '/workdays/manage',
+    name: 'workday-admin-list',
+    component: () => import('@/views/WorkdayManageListView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Manage workdays' },
+  },
+  {
+    path: '/workdays/new',
+    name: 'workday-new',
+    component: () => import('@/views/WorkdayFormView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'New workday' },
+  },
+  {
+    path: '/workdays/:id/edit',
+    name: 'workday-edit',
+    component: () => import('@/views/WorkdayFormView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Edit workday' },
+  },
+  {
+    path: '/workdays/:id/manage',
+    name: 'workday-manage',
+    component: () => import('@/views/WorkdayManageView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Manage workday' },
+  },
+  {
+    path: '/workdays/:id/roster',
+    name: 'workday-roster',
+    component: () => import('@/views/WorkdayRosterView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Roster' },
+  },
+  {
+    path: '/workdays/:id/check-in',
+    name: 'workday-check-in',
+    component: () => import('@/views/WorkdayCheckInView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Check-in' },
+  },
   { path: '/sites', name: 'sites', component: () => import('@/views/SitesView.vue'), meta: { requiresAuth: true, title: 'Sites' } },
   {
     path: '/sites/new',
@@ -78,7 +133,16 @@ export const routes: AppRouteRecord[] = [
     meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Edit site' },
   },
   { path: '/sites/:id', name: 'site-tide', component: () => import('@/views/SiteTideView.vue'), meta: { requiresAuth: true, title: 'Tide board' } },
+  // Everyone signed in reads the ledger; coordinators and admins get the write controls.
+  { path: '/nursery', name: 'nursery', component: () => import('@/views/NurseryView.vue'), meta: { requiresAuth: true, title: 'Nursery' } },
+  // Printed QR labels point here: the ledger with this tree's drawer open.
+  { path: '/nursery/trees/:id', name: 'nursery-tree', component: () => import('@/views/NurseryView.vue'), meta: { requiresAuth: true, title: 'Tree' } },
   { path: '/windows', name: 'window-calendar', component: () => import('@/views/WindowCalendarView.vue'), meta: { requiresAuth: true, title: 'Tide calendar' } },
+  // Public: anyone may browse workdays and open one; signing up asks them to sign in.
+  { path: '/workdays', name: 'workday-calendar', component: () => import('@/views/WorkdayCalendarView.vue'), meta: { title: 'Workdays' } },
+  { path: '/workdays/:id', name: 'workday', component: () => import('@/views/WorkdayView.vue'), meta: { title: 'Workday' } },
+  { path: '/my/workdays', name: 'my-workdays', component: () => import('@/views/MyWorkdaysView.vue'), meta: { requiresAuth: true, title: 'My workdays' } },
+  { path: '/my/hours', name: 'my-hours', component: () => import('@/views/MyHoursView.vue'), meta: { requiresAuth: true, title: 'My hours' } },
   { path: '/account', name: 'account', component: () => import('@/views/AccountView.vue'), meta: { requiresAuth: true, title: 'My account' } },
   { path: '/no-access', name: 'no-access', component: () => import('@/views/NoAccessView.vue'), meta: { requiresAuth: true, title: 'Not for your role' } },
   { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { title: 'Page not found' } },

@@ -20,6 +20,11 @@ export const server = setupServer(
   http.get('/api/auth/csrf', () => HttpResponse.json({ token: CSRF_TOKEN })),
   // The shell loads the organisation at start-up, so every app-level test needs an answer.
   http.get('/api/organisation', () => HttpResponse.json({ organisation: DEFAULT_ORGANISATION })),
+  // The coordinator home lists workdays; tests about other pages that land there need an answer too.
+  http.get('/api/workdays', () => HttpResponse.json({ workdays: [] })),
+  // The volunteer home shows my workdays and this year's hours: nothing yet, unless a test says otherwise.
+  http.get('/api/me/workdays', () => HttpResponse.json({ workdays: [] })),
+  http.get('/api/me/hours', () => HttpResponse.json({ rows: [], totalMinutes: 0, totalHours: 0, workdaysAttended: 0 })),
 );
 
 beforeAll(() => server.listen({ onUnhandledRequest: 'error' }));

@@ -1,11 +1,16 @@
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
 import { screen, waitFor, within } from '@testing-library/vue';
 import { useOrganisationStore } from '@/stores/organisation';
 import { buildOrganisation, mockOrganisation } from '../support/organisation';
 import { renderApp } from '../support/render-app';
 import { buildUser } from '../support/users';
+import { setViewport } from '../support/viewport';
 
 describe('AppDemoBanner and the organisation in the shell', () => {
+  afterEach(async () => {
+    await setViewport(1024, 768);
+  });
+
   it('marks demo data under the top bar, with the organisation name', async () => {
     mockOrganisation(buildOrganisation({ name: 'Bayhaven Shoreline Trust', isDemo: true }));
     await renderApp('/', buildUser());
@@ -25,6 +30,8 @@ describe('AppDemoBanner and the organisation in the shell', () => {
   });
 
   it('keeps the app usable when the organisation cannot be loaded', async () => {
+    // Wide enough for the links to sit in the bar (from 1120px).
+    await setViewport(1280, 800);
     mockOrganisation('error');
     const { pinia } = await renderApp('/', buildUser({ name: 'Lena Park' }));
 

@@ -1,4 +1,4 @@
-import { afterEach, describe, expect, it } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { screen, waitFor, within } from '@testing-library/vue';
 import userEvent from '@testing-library/user-event';
 import { http, HttpResponse } from 'msw';
@@ -15,25 +15,36 @@ function navLinks(): string[] {
 }
 
 describe('AppTopBar', () => {
+  // The links sit in the bar from 1120px; happy-dom's window is 1024px wide unless told otherwise.
+  beforeEach(async () => {
+    await setViewport(1280, 800);
+  });
   afterEach(async () => {
     await setViewport(1024, 768);
   });
 
-  it('gives volunteers Home, Sites, Tide calendar and My account, with their name and role', async () => {
+  it('gives volunteers Home, Workdays, My workdays, Sites, Tide calendar and My account, with their name and role', async () => {
     await renderApp('/', buildUser({ role: 'volunteer', name: 'Lena Park' }));
 
     await screen.findByRole('heading', { level: 1, name: 'Hello, Lena' });
-    expect(navLinks()).toEqual(['Home', 'Sites', 'Tide calendar', 'My account']);
+    const links = navLinks();
+    expect(links.slice(0, 3)).toEqual(['Home', 'Workdays', 'My workdays']);
+    expect(links).toEqual(expect.arrayContaining(['Sites', 'Tide calendar']));
+    expect(links.at(-1)).toBe('My account');
+    expect(links).not.toEqual(expect.arrayContaining(['People']));
     const banner = within(screen.getByRole('banner'));
     expect(banner.getByText('Lena Park')).toBeTruthy();
     expect(banner.getByText('Volunteer')).toBeTruthy();
   });
 
-  it('adds People for coordinators', async () => {
+  it('adds Manage workdays and People for coordinators', async () => {
     await renderApp('/', buildUser({ role: 'coordinator' }));
 
     await screen.findByRole('heading', { level: 2, name: 'At the water' });
-    expect(navLinks()).toEqual(['Home', 'Sites', 'Tide calendar', 'People', 'My account']);
+    const links = navLinks();
+    expect(links.slice(0, 3)).toEqual(['Home', 'Workdays', 'My workdays']);
+    expect(links).toEqual(expect.arrayContaining(['Manage workdays', 'People']));
+    expect(links.at(-1)).toBe('My account');
   });
 
   it('adds Settings for admins, just before My account', async () => {
@@ -66,7 +77,23 @@ describe('AppTopBar', () => {
 
     await waitFor(() => expect(router.currentRoute.value.name).toBe('sign-in'));
     expect(loggedOut).toBe(true);
-    expect(navLinks()).toEqual(['Sign in', 'Create an account']);
+    expect(navLinks()).toEqual(['Workdays', 'Sign in', 'Create an account']);
+  });
+
+  it('offers signed-out visitors the public workdays beside sign-in', async () => {
+    server.use(http.get('/api/workdays', () => HttpResponse.json({ workdays: [] })));
+    await renderApp('/workdays', null);
+
+    await screen.findByRole('heading', { level: 1, name: 'Workdays' });
+    expect(navLinks()).toEqual(['Workdays', 'Sign in', 'Create an account']);
+  });
+
+  it('folds the links into the Menu button below 1120px, where they would crowd the name', async () => {
+    await setViewport(1024, 768);
+    await renderApp('/', buildUser({ role: 'admin' }));
+
+    expect(await screen.findByRole('button', { name: 'Menu' })).toBeTruthy();
+    expect(screen.queryByRole('navigation', { name: 'Main' })).toBeNull();
   });
 
   it('folds the menu into a button on a phone-width screen', async () => {
@@ -80,7 +107,10 @@ describe('AppTopBar', () => {
     await user.click(menuButton);
 
     const drawer = await screen.findByRole('dialog', { name: 'Menu' });
-    expect(within(drawer).getAllByRole('link').map((a) => a.textContent?.trim())).toEqual(['Home', 'Sites', 'Tide calendar', 'People', 'My account']);
+    const links = within(drawer).getAllByRole('link').map((a) => a.textContent?.trim());
+    expect(links.slice(0, 3)).toEqual(['Home', 'Workdays', 'My workdays']);
+    expect(links).toEqual(expect.arrayContaining(['Sites', 'Tide calendar', 'People']));
+    expect(links.at(-1)).toBe('My account');
     expect(within(drawer).getByText('Kai Torres')).toBeTruthy();
     expect(menuButton.getAttribute('aria-expanded')).toBe('true');
   });

@@ -1,4 +1,5 @@
 import { http, HttpResponse } from 'msw';
+import { DEFAULT_NURSERY_RULES } from '@shared/schemas/nursery.schema';
 import type { OrganisationSettings, PublicOrganisation } from '@shared/schemas/organisation.schema';
 import { DEFAULT_ORGANISATION, server } from '../../setup/client-setup';
 import { errorResponse } from './msw';
@@ -14,6 +15,7 @@ export function buildSettings(overrides: Partial<OrganisationSettings> = {}): Or
     taxId: '12-3456789',
     contactEmail: 'hello@harbour-fringe.example.test',
     windowWeights: { duration: 1, lowWater: 1, weekend: 0.5, startHour: 0.5 },
+    nurseryRules: DEFAULT_NURSERY_RULES,
     ...overrides,
   };
 }

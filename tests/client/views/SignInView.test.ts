@@ -1,4 +1,4 @@
-import { describe, expect, it } from 'vitest';
+import { afterEach, describe, expect, it } from 'vitest';
 import { screen, waitFor, within } from '@testing-library/vue';
 import userEvent from '@testing-library/user-event';
 import { http, HttpResponse } from 'msw';
@@ -6,8 +6,13 @@ import { server } from '../../setup/client-setup';
 import { errorResponse } from '../support/msw';
 import { renderApp } from '../support/render-app';
 import { buildUser } from '../support/users';
+import { setViewport } from '../support/viewport';
 
 describe('SignInView', () => {
+  afterEach(async () => {
+    await setViewport(1024, 768);
+  });
+
   it('has labelled fields with autocomplete hints and the other ways in', async () => {
     await renderApp('/login', null);
 
@@ -61,6 +66,8 @@ describe('SignInView', () => {
   });
 
   it('signs in and returns to the page in ?redirect=', async () => {
+    // Wide enough for the top bar to show who is signed in (from 1120px).
+    await setViewport(1280, 800);
     const coordinator = buildUser({ role: 'coordinator', name: 'Kai Torres' });
     server.use(
       http.post('/api/auth/login', () => HttpResponse.json({ user: coordinator })),

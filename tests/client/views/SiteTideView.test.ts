@@ -100,6 +100,9 @@ describe('SiteTideView', () => {
     expect(await main.findByText('Draft workday created')).toBeTruthy();
     const drafts = within(main.getByRole('list', { name: 'Draft workdays' }));
     expect(drafts.getByText('Planting at Heron Cove')).toBeTruthy();
+    // Each draft leads on to the full workday form and its manage page.
+    expect(drafts.getByRole('link', { name: 'Edit draft: Planting at Heron Cove' }).getAttribute('href')).toBe('/workdays/w1/edit');
+    expect(drafts.getByRole('link', { name: 'Planting at Heron Cove' }).getAttribute('href')).toBe('/workdays/w1/manage');
   });
 
   it('ranks the next 8 weeks of windows, best first, each linking to its week', async () => {

@@ -1,11 +1,11 @@
-// Lints the TypeScript sources; pure modules (shared/, server/domain/) may import only zod, the two
-// pure calculation libraries suncalc and @neaps/tide-predictor, and each other.
+// Lints the TypeScript sources; pure modules (shared/, server/domain/) may import only zod, the pure
+// calculation libraries suncalc, @neaps/tide-predictor and highs (a MILP solver in WebAssembly), and each other.
 import tseslint from 'typescript-eslint';
 
 const pureRule = {
   'no-restricted-imports': ['error', {
     patterns: [
-      { regex: '^(?!zod$|suncalc$|@neaps/tide-predictor$|\\.{1,2}/|@shared/)', message: 'Pure modules import only zod and other pure modules.' },
+      { regex: '^(?!zod$|suncalc$|@neaps/tide-predictor$|highs$|\\.{1,2}/|@shared/)', message: 'Pure modules import only zod and other pure modules.' },
       { regex: '^\\.\\./(routes|services|db|adapters|middleware|cli|errors|config|app)\\b|/server/(?!domain/)|/src/|/fakes/', message: 'Pure modules import only zod and other pure modules.' },
     ],
   }],

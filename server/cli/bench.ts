@@ -14,6 +14,7 @@ import { dropDatabase, ensureDatabase, startLocalPostgres } from './postgres.js'
 import { projectRoot } from './stack.js';
 import { TEST_PG_PORT } from '../../tests/setup/test-env.js';
 import { benchTide } from './bench-tide.js';
+import { benchTrips } from './bench-trips.js';
 
 const quantile = (sorted: number[], q: number) => sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))] ?? 0;
 const fmt = (ms: number) => `${ms.toFixed(1)} ms`;
@@ -67,6 +68,7 @@ console.log(`GET /api/auth/me (signed out), 2000 requests × 10 concurrent: ${me
 console.log(`server process memory: rss ${(process.memoryUsage().rss / 2 ** 20).toFixed(0)} MiB, heap used ${(process.memoryUsage().heapUsed / 2 ** 20).toFixed(0)} MiB`);
 
 await benchTide((line) => console.log(line));
+await benchTrips((line) => console.log(line));
 
 server.closeAllConnections();
 server.close();

@@ -35,7 +35,7 @@ export async function startLocalStack(config: Config, log: (s: string) => void, 
       const ran = await db.runMigrations({ transaction: 'each' });
       if (ran.length > 0) log(`Ran ${ran.length} migration(s)`);
       const seeded = await seedDemo({ db, hasher: createPasswordHasher(config.PASSWORD_SCRYPT_LOG_N), now: new Date(), stations: createTideStationDirectory() });
-      log(seeded.created + seeded.workdays > 0 ? `Seeded the demo organisation (${seeded.created} people, ${seeded.workdays} workdays)` : 'Demo data already present');
+      log(seeded.created + seeded.workdays + seeded.trees > 0 ? `Seeded the demo organisation (${seeded.created} people, ${seeded.workdays} workdays, ${seeded.trees} trees)` : 'Demo data already present');
     } finally {
       await db.destroy();
     }

@@ -7,17 +7,19 @@ import { User } from '../entities/user.entity.js';
 import { DEMO_PASSWORD, demoPeople } from './demo-people.js';
 import { demoSites } from './demo-sites.js';
 import { seedDemoWorkdays } from './demo-workdays.js';
+import { seedDemoNursery } from './demo-nursery.js';
 
 /**
  * Seeds the demo organisation once: rows are inserted only when missing (by e-mail), so a
  * second start adds nothing. All demo people share one password hash, computed once.
  */
-export async function seedDemo(deps: { db: DataSource; hasher: PasswordHasher; now: Date; stations?: TideStationDirectory }): Promise<{ created: number; workdays: number }> {
+export async function seedDemo(deps: { db: DataSource; hasher: PasswordHasher; now: Date; stations?: TideStationDirectory }): Promise<{ created: number; workdays: number; trees: number }> {
   await seedDemoOrganisation(deps.db);
   await deps.db.getRepository(Site).createQueryBuilder().insert().values(demoSites).orIgnore().execute();
   const created = await seedDemoPeople(deps);
   const workdays = deps.stations ? await seedDemoWorkdays({ db: deps.db, stations: deps.stations, now: deps.now }) : 0;
-  return { created, workdays };
+  const trees = await seedDemoNursery({ db: deps.db, now: deps.now });
+  return { created, workdays, trees };
 }
 
 async function seedDemoPeople(deps: { db: DataSource; hasher: PasswordHasher; now: Date }): Promise<number> {

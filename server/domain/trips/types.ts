@@ -1,0 +1,152 @@
+/**
+ * Shapes of the trip planner: a self-contained instance in, a trip plan out. Inside the domain
+ * every instant is epoch milliseconds (`start`, `departAt`, …); the API speaks ISO strings and
+ * converts at its edge (see `api.ts`).
+ */
+import type { CraftKind } from '../../../shared/schemas/crew.schema.js';
+
+export type { CraftKind };
+
+/** One craft of the fleet. `maxLoadKg` is the maker's rating or the capacity plate. */
+export interface TripCraft {
+  id: string;
+  kind: CraftKind;
+  seats: number;
+  maxLoadKg: number;
+  /** How many pots ride securely on one run. */
+  potSlots: number;
+  speedKmh: number;
+  draftM?: number | null;
+  needsOperator: boolean;
+  /** A volunteer's own craft: only its owner paddles it. */
+  ownerId?: string | null;
+}
+
+/** One person going out to the site. Skills: `paddler`, `operator` (alias `boat-operator`), … */
+export interface TripPerson {
+  id: string;
+  /** Only when the volunteer chose to give it; otherwise the standard assumed weight counts. */
+  weightKg?: number | null;
+  skills: readonly string[];
+  /** Set for a minor: the adult they must ride with, out and back. */
+  guardianId?: string | null;
+}
+
+/** Share of the rated maximum load the plan may use, by kind of rating. */
+export interface LoadMargin {
+  /** Kayaks and canoes (maker's figure): default 0.7. */
+  paddlecraft: number;
+  /** Skiffs and operator-run powerboats (capacity plate): default 1.0. */
+  plated: number;
+}
+
+export interface TripInstance {
+  /** The low-water window, epoch ms. */
+  window: { start: number; end: number };
+  route: { distanceKm: number; loadMinutes: number; unloadMinutes: number };
+  /** Minutes one pair of planters needs per tree; 0 or less means planting is not limited. */
+  plantingMinutesPerTree: number;
+  loadMargin?: LoadMargin;
+  craft: readonly TripCraft[];
+  people: readonly TripPerson[];
+  pots: { count: number; massKg: number };
+}
+
+/** Tuning that is not part of the instance. */
+export interface TripOptions {
+  /** Weight counted for a person who gave none; default `DEFAULT_STANDARD_PERSON_KG`. */
+  standardPersonKg?: number;
+  /** HiGHS wall-clock limit in seconds; default 1.5. */
+  timeLimitSeconds?: number;
+}
+
+/** One leg from the launch to the site (and back). `people` lists everyone aboard on the way out. */
+export interface TripRun {
+  craftId: string;
+  /** 1-based run number of this craft. */
+  run: number;
+  departAt: number;
+  landAt: number;
+  returnAt: number;
+  people: string[];
+  pots: number;
+  loadKg: number;
+  /** Load as a share of the rated maximum (`maxLoadKg`), not of the margin. */
+  loadShare: number;
+}
+
+/** Why a person or pots stayed ashore, or why a craft stayed idle. */
+export type UnplacedReason =
+  | 'no-craft'
+  | 'window-too-short'
+  | 'no-operator'
+  | 'no-paddler'
+  | 'owner-absent'
+  | 'no-seat'
+  | 'over-load'
+  | 'too-heavy'
+  | 'guardian-not-aboard'
+  | 'planting-time'
+  | 'left-ashore';
+
+export interface UnplacedPerson {
+  id: string;
+  reason: UnplacedReason;
+  detail: string;
+}
+
+export interface UnplacedPots {
+  count: number;
+  reason: UnplacedReason;
+  detail: string;
+}
+
+export interface IdleCraft {
+  craftId: string;
+  reason: UnplacedReason | 'not-needed';
+  detail: string;
+}
+
+export type TripPlanStatus = 'optimal' | 'feasible' | 'infeasible';
+
+export interface TripPlan {
+  status: TripPlanStatus;
+  runs: TripRun[];
+  /** When the last run carrying pots lands; null when no pot moves. */
+  lastLandingAt: number | null;
+  unplaced: { pots: number; potReasons: UnplacedPots[]; people: UnplacedPerson[] };
+  /** Craft making no run, with the reason. */
+  idleCraft: IdleCraft[];
+  solver: 'highs' | 'heuristic';
+  /**
+   * HiGHS's relative MIP gap on the weighted objective; 0 when proven optimal. The weights make
+   * even a small figure worth a pot or a landing slot: read `potsUpperBound` for the pots.
+   */
+  gap?: number;
+  /** Most pots any valid plan could land, as far as the solver proved. */
+  potsUpperBound?: number;
+  warnings: string[];
+}
+
+/** One broken rule found by `validateTripPlan`. */
+export interface TripViolation {
+  rule:
+    | 'unknown-craft'
+    | 'unknown-person'
+    | 'run-order'
+    | 'timing'
+    | 'seats'
+    | 'load'
+    | 'pot-slots'
+    | 'pots-total'
+    | 'skipper'
+    | 'travels-once'
+    | 'guardian'
+    | 'return'
+    | 'window'
+    | 'planting-time';
+  craftId?: string;
+  run?: number;
+  personId?: string;
+  message: string;
+}

@@ -25,7 +25,7 @@ export function mountApi(app: Express, s: Services, deps: { db: DataSource; pass
   app.use('/api/health', healthRouter({ db: deps.db }));
   app.use('/api/auth', authRouter({ auth: s.auth, passport: deps.passport }));
   app.use('/api/organisation', organisationRouter({ organisation: s.organisation }));
-  app.use('/api', tideRouter({ stations: s.stations, siteTide: s.siteTide, organisation: s.organisation }));
+  app.use('/api', tideRouter({ stations: s.stations, siteTide: s.siteTide, organisation: s.organisation, workdays: s.workdays }));
   app.use('/api/sites', siteRouter({ sites: s.sites }));
   // Before the workday router, whose '/:id' would otherwise catch '<id>.ics'.
   app.use('/api', calendarRouter({ calendar: s.calendar, optOut: s.optOut, appUrl: deps.config.APP_URL }));

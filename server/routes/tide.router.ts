@@ -7,6 +7,9 @@ import { requireAuth } from '../middleware/auth.js';
 import type { OrganisationService } from '../services/organisation.service.js';
 import type { SiteTideService } from '../services/site-tide.service.js';
 import type { StationService } from '../services/station.service.js';
+import type { WorkdayService } from '../services/workday.service.js';
+import { WorkdayIdParams } from '../../shared/schemas/workday.schema.js';
+import { localDate, zonedTimeToUtc } from '../domain/tide/time-zone.js';
 
 const StationParams = z.object({ id: z.string().min(3).max(80) });
 const UnitsQuery = z.object({ units: z.enum(['ft', 'm']).optional() });
@@ -22,7 +25,7 @@ function span(q: { from: string; to: string }, maxDays = 400) {
 }
 
 /** Tide stations (`/api/stations`) and sites' tide boards and windows; signed-in users only. */
-export function tideRouter(deps: { stations: StationService; siteTide: SiteTideService; organisation: OrganisationService }): Router {
+export function tideRouter(deps: { stations: StationService; siteTide: SiteTideService; organisation: OrganisationService; workdays: WorkdayService }): Router {
   const r = Router();
   // Mounted at /api beside other routers, so auth is per route, not r.use().
   const units = async (req: Request) => UnitsQuery.parse(req.query).units ?? (await deps.organisation.publicView()).units;
@@ -53,6 +56,15 @@ export function tideRouter(deps: { stations: StationService; siteTide: SiteTideS
   r.get('/sites/:id/windows', requireAuth, async (req, res) => {
     const { sort } = SortQuery.parse(req.query);
     res.json(await deps.siteTide.windows(SiteIdParams.parse(req.params).id, span(TideSpanQuery.parse(req.query)), await units(req), sort));
+  });
+  // Public, like the workday page itself: the tide on the workday's local day at its site.
+  r.get('/workdays/:id/tide', async (req, res) => {
+    const staff = req.user?.role === 'coordinator' || req.user?.role === 'admin';
+    const w = await deps.workdays.detail(WorkdayIdParams.parse(req.params).id, staff);
+    const [y, m, d] = localDate(Date.parse(w.startsAt), w.site.timeZone).split('-').map(Number) as [number, number, number];
+    const fromMs = zonedTimeToUtc(w.site.timeZone, y, m, d);
+    const toMs = zonedTimeToUtc(w.site.timeZone, y, m, d + 1);
+    res.json(await deps.siteTide.day(w.siteId, { fromMs, toMs }, await units(req)));
   });
   r.get('/windows', requireAuth, async (req, res) => {
     res.json(await deps.siteTide.calendar(span(TideSpanQuery.parse(req.query), 62), await units(req)));

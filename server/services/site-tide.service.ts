@@ -66,6 +66,12 @@ export function createSiteTideService(deps: { sites: SiteService; stations: Stat
       return { site: toSiteDto(site), station: toStationSummary(station), units: unit, datum: 'MLLW', levels, extremes, daylight: daylightFor(site, span), windows, lines };
     },
 
+    /** A workday's local day of tide, for its public page: no site details, no windows. */
+    async day(siteId: string, span: Span, unit: LengthUnit) {
+      const { station, units, datum, levels, extremes, daylight, lines } = await this.board(siteId, span, unit);
+      return { station, units, datum, levels, extremes, daylight, lines };
+    },
+
     async windows(siteId: string, span: Span, unit: LengthUnit, sort: 'score' | 'time') {
       const site = await deps.sites.get(siteId);
       const station = await deps.stations.get(site.stationId);

@@ -17,6 +17,14 @@ export const SiteTide = z.object({
 });
 export type SiteTide = z.infer<typeof SiteTide>;
 
+/** A workday's local day of tide (public, like the workday page). */
+export const WorkdayDayTide = SiteTide.omit({ site: true, windows: true });
+export type WorkdayDayTide = z.infer<typeof WorkdayDayTide>;
+
+export async function fetchWorkdayTide(workdayId: string, units: LengthUnit): Promise<WorkdayDayTide> {
+  return get(`/api/workdays/${encodeURIComponent(workdayId)}/tide${queryString({ units })}`, WorkdayDayTide);
+}
+
 const SiteRef = z.object({ id: z.string(), name: z.string(), timeZone: z.string() });
 export type SiteRef = z.infer<typeof SiteRef>;
 

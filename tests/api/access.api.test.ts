@@ -48,6 +48,7 @@ const routes: RouteCase[] = [
   { method: 'get', path: '/api/windows?from=2026-01-01&to=2026-01-02', expect: SIGNED_IN },
   { method: 'get', path: '/api/workdays', expect: ALL_OK },
   { method: 'get', path: `/api/workdays/${NO_ID}`, expect: ALL_404 },
+  { method: 'get', path: `/api/workdays/${NO_ID}/tide`, expect: ALL_404 },
   { method: 'post', path: '/api/workdays', body: {}, expect: { ...STAFF, coordinator: 400, admin: 400 } },
   { method: 'patch', path: `/api/workdays/${NO_ID}`, body: {}, expect: STAFF_404 },
   { method: 'post', path: `/api/workdays/${NO_ID}/publish`, expect: STAFF_404 },

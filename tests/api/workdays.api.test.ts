@@ -37,6 +37,20 @@ describe('workday lifecycle', () => {
     expect((await agent.post(`/api/workdays/${id}/complete`).set('X-CSRF-Token', token)).body.workday.status).toBe('completed');
   });
 
+  it("gives anyone the tide of a public workday's local day, but not of a draft", async () => {
+    const w = await buildWorkday(t.db, { startsAt: new Date('2027-01-09T15:00:00Z'), endsAt: new Date('2027-01-09T18:00:00Z') });
+    const res = await request(t.app).get(`/api/workdays/${w.id}/tide`).query({ units: 'ft' });
+    expect(res.status).toBe(200);
+    expect(res.body).toMatchObject({ units: 'ft', datum: 'MLLW', station: { id: 'noaa/8726738' } });
+    expect(res.body).not.toHaveProperty('site');
+    // 9 January 2027 in New York (EST, UTC−5): local midnight is 05:00Z.
+    expect(res.body.levels[0].time).toBe('2027-01-09T05:00:00.000Z');
+    expect(res.body.levels.at(-1).time).toBe('2027-01-10T05:00:00.000Z');
+    for (const e of res.body.extremes as { time: string }[]) expect(e.time >= '2027-01-09T05:00' && e.time <= '2027-01-10T05:00').toBe(true);
+    const draft = await buildWorkday(t.db, { status: 'draft' });
+    expect((await request(t.app).get(`/api/workdays/${draft.id}/tide`)).status).toBe(404);
+  });
+
   it('keeps drafts out of the public list', async () => {
     const draft = await buildWorkday(t.db, { status: 'draft' });
     const anon = await request(t.app).get('/api/workdays').query({ siteId: draft.siteId });

@@ -30,7 +30,7 @@ describe('HomeVolunteerPanel', () => {
         seenOpen.push(new URL(request.url));
         return HttpResponse.json({ workdays: [open, next, full] });
       }),
-      http.get(`/api/sites/${next.siteId}/tide`, () => HttpResponse.json(buildDayTide())),
+      http.get(`/api/workdays/${next.id}/tide`, () => HttpResponse.json(buildDayTide())),
     );
     await renderApp('/', buildUser({ name: 'Rosa Mendes' }));
 

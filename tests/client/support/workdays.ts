@@ -4,7 +4,7 @@ import type { SignupResult } from '@shared/schemas/crew.schema';
 import type { Profile } from '@shared/schemas/profile.schema';
 import type { WorkdayDto } from '@shared/schemas/workday.schema';
 import type { Waiver } from '@/api/signups';
-import type { SiteTide } from '@/api/tide';
+import type { WorkdayDayTide } from '@/api/tide';
 import { server } from '../../setup/client-setup';
 import { errorResponse } from './msw';
 import { buildSite, buildTide } from './sites';
@@ -62,7 +62,7 @@ export function buildProfile(overrides: Partial<Profile> = {}): Profile {
  * The tide at Heron Cove on Sat 15 Mar 2025 (EDT: local midnight is 04:00Z): a low at 08:40 and a high
  * at 15:10, and one low after the day, which the page must leave out.
  */
-export function buildDayTide(): SiteTide {
+export function buildDayTide(): WorkdayDayTide {
   const from = Date.parse('2025-03-15T04:00:00.000Z');
   const levels = Array.from({ length: 145 }, (_, i) => ({
     time: new Date(from + i * 600_000).toISOString(),
@@ -93,7 +93,7 @@ export interface PageRequests {
  */
 export function mockWorkdayPage(
   workday: WorkdayDto,
-  options: { mine?: SignupResult | null; profile?: Profile; waiver?: Waiver; tide?: SiteTide; signup?: () => Response } = {},
+  options: { mine?: SignupResult | null; profile?: Profile; waiver?: Waiver; tide?: WorkdayDayTide; signup?: () => Response } = {},
 ): PageRequests {
   const seen: PageRequests = { tide: [], posted: [], deleted: 0 };
   const path = `/api/workdays/${workday.id}`;
@@ -101,7 +101,7 @@ export function mockWorkdayPage(
     http.get(path, () => HttpResponse.json({ workday })),
     http.get(`${path}/signups/mine`, () => (options.mine ? HttpResponse.json(options.mine) : errorResponse(404, 'not_found', 'Sign-up not found'))),
     http.get(`${path}/crew`, () => HttpResponse.json({ crew: [{ firstName: 'Ana', role: 'planter' }, { firstName: 'Ben', role: 'planter' }, { firstName: 'Kai', role: 'own-kayak' }] })),
-    http.get(`/api/sites/${workday.siteId}/tide`, ({ request }) => {
+    http.get(`/api/workdays/${workday.id}/tide`, ({ request }) => {
       seen.tide.push(new URL(request.url));
       return HttpResponse.json(options.tide ?? buildDayTide());
     }),

@@ -1,4 +1,5 @@
 import { reactive, ref, type Ref } from 'vue';
+import { DEFAULT_NURSERY_RULES } from '@shared/schemas/nursery.schema';
 import { UpdateOrganisationBody, type OrganisationSettings } from '@shared/schemas/organisation.schema';
 import { fetchOrganisationSettings, updateOrganisationSettings } from '@/api/organisation';
 import { useOrganisationStore } from '@/stores/organisation';
@@ -6,13 +7,15 @@ import { useAsyncAction } from './useAsyncAction';
 import { useFormSubmit } from './useFormSubmit';
 
 /** The settings an admin can change; `isDemo` is set by the seed and only shown. */
-export type SettingsForm = Pick<OrganisationSettings, 'name' | 'legalName' | 'taxId' | 'contactEmail' | 'units' | 'timeZone'>;
+export type SettingsForm = Pick<OrganisationSettings, 'name' | 'legalName' | 'taxId' | 'contactEmail' | 'units' | 'timeZone' | 'windowWeights' | 'nurseryRules'>;
 
-const FIELDS: readonly (keyof SettingsForm)[] = ['name', 'legalName', 'taxId', 'contactEmail', 'units', 'timeZone'];
+const FIELDS: readonly (keyof SettingsForm)[] = ['name', 'legalName', 'taxId', 'contactEmail', 'units', 'timeZone', 'windowWeights', 'nurseryRules'];
 
 /** Only what differs from the saved settings, so a PATCH never rewrites a value nobody touched. */
-function changes(form: SettingsForm, saved: OrganisationSettings): Record<string, string> {
-  return Object.fromEntries(FIELDS.filter((key) => form[key] !== saved[key]).map((key) => [key, form[key]]));
+function changes(form: SettingsForm, saved: OrganisationSettings): Partial<SettingsForm> {
+  // The two rule groups are objects: compare them by value.
+  const differs = (key: keyof SettingsForm) => JSON.stringify(form[key]) !== JSON.stringify(saved[key]);
+  return Object.fromEntries(FIELDS.filter(differs).map((key) => [key, form[key]]));
 }
 
 export interface OrganisationSettingsState {
@@ -33,13 +36,16 @@ export interface OrganisationSettingsState {
 export function useOrganisationSettings(): OrganisationSettingsState {
   const organisation = useOrganisationStore();
   const settings = ref<OrganisationSettings | null>(null);
-  const form = reactive<SettingsForm>({ name: '', legalName: '', taxId: '', contactEmail: '', units: 'ft', timeZone: '' });
+  const form = reactive<SettingsForm>({
+    name: '', legalName: '', taxId: '', contactEmail: '', units: 'ft', timeZone: '',
+    windowWeights: { duration: 0.4, lowWater: 0.2, weekend: 0.25, startHour: 0.15 }, nurseryRules: { ...DEFAULT_NURSERY_RULES },
+  });
   const saved = ref(false);
 
   function show(next: OrganisationSettings): void {
     settings.value = next;
-    const { name, legalName, taxId, contactEmail, units, timeZone } = next;
-    Object.assign(form, { name, legalName, taxId, contactEmail, units, timeZone });
+    const { name, legalName, taxId, contactEmail, units, timeZone, windowWeights, nurseryRules } = next;
+    Object.assign(form, { name, legalName, taxId, contactEmail, units, timeZone, windowWeights: { ...windowWeights }, nurseryRules: { ...nurseryRules } });
   }
 
   const { loading, error: loadError, run } = useAsyncAction(fetchOrganisationSettings);

@@ -112,6 +112,30 @@ describe('OrganisationSettingsView', () => {
     expect(screen.getByRole('complementary', { name: 'Demo data' }).textContent).toContain('Bayhaven Mangrove Trust and everyone');
   });
 
+  it('saves changed window weights and readiness rules as whole groups, and nothing else', async () => {
+    const seen = answerSettings(buildSettings({ windowWeights: { duration: 0.4, lowWater: 0.2, weekend: 0.25, startHour: 0.15 } }));
+    const user = userEvent.setup();
+    const main = await openSettings();
+
+    const weekend = main.getByRole('spinbutton', { name: 'Weekends' });
+    await user.clear(weekend);
+    await user.type(weekend, '0.5');
+    await user.click(main.getByRole('radio', { name: /at most a share of the time/ }));
+    const share = await main.findByRole('spinbutton', { name: /Largest share of hours under water/ });
+    await user.clear(share);
+    await user.type(share, '0.05');
+    const days = main.getByRole('spinbutton', { name: 'For at least (days)' });
+    await user.clear(days);
+    await user.type(days, '28');
+    await user.click(main.getByRole('button', { name: 'Save settings' }));
+
+    expect(await main.findByText('Settings saved.')).toBeTruthy();
+    expect(seen.patches).toEqual([{
+      windowWeights: { duration: 0.4, lowWater: 0.2, weekend: 0.5, startHour: 0.15 },
+      nurseryRules: { crownRule: 'share', maxCrownSubmergedShare: 0.05, salinityTolerancePpt: 2, holdDays: 28 },
+    }]);
+  });
+
   it('shows the server’s field errors from a 400 under the matching fields', async () => {
     answerSettings(buildSettings());
     server.use(

@@ -16,11 +16,13 @@ import { Tank } from './entities/tank.entity.js';
 import { SalinityReading } from './entities/salinity-reading.entity.js';
 import { Tree } from './entities/tree.entity.js';
 import { TreeEvent } from './entities/tree-event.entity.js';
+import { Craft } from './entities/craft.entity.js';
+import { TripPlan } from './entities/trip-plan.entity.js';
 import { User } from './entities/user.entity.js';
 import { migrations } from './migrations/index.js';
 
 export const entities = [User, AuthToken, Organisation, Site, Workday, WorkdayRole, Signup, VolunteerProfile, WaiverVersion, AuditLog, OutboxMessage,
-  Photo, CollectionBatch, Tank, SalinityReading, Tree, TreeEvent];
+  Photo, CollectionBatch, Tank, SalinityReading, Tree, TreeEvent, Craft, TripPlan];
 
 /** One DataSource per process; migrations run explicitly at start, never synchronize. */
 export function createDataSource(url: string): DataSource {

@@ -59,7 +59,7 @@ export function createServices(deps: ServiceDeps) {
     waivers,
     auth: createAuthService({ db, hasher, tokens, mailer: deps.mailer, appUrl: config.APP_URL, clock, log: deps.log }),
     siteTide: createSiteTideService({ sites, stations, organisation }),
-    workdays: createWorkdayService({ db, sites, notifier }),
+    workdays: createWorkdayService({ db, sites, notifier, clock }),
     signups: createSignupService({ db, sites, waivers, notifier, clock }),
     roster: createRosterService({ db }),
     attendance: createAttendanceService({ db, clock }),

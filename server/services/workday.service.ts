@@ -16,7 +16,7 @@ const badState = (message: string) => new AppError(409, 'conflict', message);
 const NOTIFY_FIELDS = ['startsAt', 'endsAt', 'meetingPoint', 'siteId'] as const;
 const FIELD_WORDS: Record<(typeof NOTIFY_FIELDS)[number], string> = { startsAt: 'start time', endsAt: 'finish time', meetingPoint: 'meeting point', siteId: 'site' };
 
-export function createWorkdayService(deps: { db: DataSource; sites: SiteService; notifier: CrewNotifier }) {
+export function createWorkdayService(deps: { db: DataSource; sites: SiteService; notifier: CrewNotifier; clock: () => Date }) {
   const repo = deps.db.getRepository(Workday);
   const one = async (w: Workday) => (await toWorkdayDtos(deps.db, [w]))[0]!;
 
@@ -53,7 +53,7 @@ export function createWorkdayService(deps: { db: DataSource; sites: SiteService;
           startsAt: new Date(body.startsAt),
           endsAt: new Date(body.endsAt),
           status,
-          publishedAt: status === 'published' ? new Date() : null,
+          publishedAt: status === 'published' ? deps.clock() : null,
           createdById,
         }));
         if (roles?.length) await tx.getRepository(WorkdayRole).insert(roles.map((r) => ({ ...r, workdayId: w.id })));
@@ -90,7 +90,7 @@ export function createWorkdayService(deps: { db: DataSource; sites: SiteService;
       const saved = await deps.db.transaction(async (tx) => {
         const w = await lockWorkday(tx, id);
         if (w.status !== 'draft') throw badState(`Only a draft can be published; this workday is ${w.status}`);
-        Object.assign(w, { status: 'published', publishedAt: new Date(), sequence: w.sequence + 1 });
+        Object.assign(w, { status: 'published', publishedAt: deps.clock(), sequence: w.sequence + 1 });
         return tx.getRepository(Workday).save(w);
       });
       return one(saved);

@@ -8,6 +8,7 @@ import type { Services } from '../services/index.js';
 import { authRouter } from './auth.router.js';
 import { calendarRouter } from './calendar.router.js';
 import { crewRouter } from './crew.router.js';
+import { fleetRouter } from './fleet.router.js';
 import { healthRouter } from './health.router.js';
 import { meRouter } from './me.router.js';
 import { nurseryRouter } from './nursery.router.js';
@@ -17,6 +18,7 @@ import { siteRouter } from './site.router.js';
 import { tankRouter } from './tank.router.js';
 import { tideRouter } from './tide.router.js';
 import { treeRouter } from './tree.router.js';
+import { tripPlanRouter } from './trip-plan.router.js';
 import { userRouter, volunteerRouter } from './user.router.js';
 import { waiverRouter } from './waiver.router.js';
 import { workdayRouter } from './workday.router.js';
@@ -39,5 +41,7 @@ export function mountApi(app: Express, s: Services, deps: { db: DataSource; pass
   app.use('/api', tankRouter({ tanks: s.tanks, brining: s.brining, bulk: s.treeBulk }));
   app.use('/api', nurseryRouter({ readiness: s.readiness, reservations: s.reservations }));
   app.use('/api/photos', photoRouter({ photos: s.photos }));
+  app.use('/api/fleet', fleetRouter({ fleet: s.fleet }));
+  app.use('/api', tripPlanRouter({ tripPlans: s.tripPlans }));
   app.use('/api', apiNotFound);
 }

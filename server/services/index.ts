@@ -8,6 +8,7 @@ import { createAttendanceService } from './attendance.service.js';
 import { createAuthTokenService } from './auth-token.service.js';
 import { createAuthService } from './auth.service.js';
 import { createCalendarService } from './calendar.service.js';
+import { createFleetService } from './fleet.service.js';
 import type { CrewNotifier } from './crew-notifier.js';
 import { createMeService } from './me.service.js';
 import { createOrganisationService } from './organisation.service.js';
@@ -27,6 +28,8 @@ import { createTreeBulkService } from './tree-bulk.service.js';
 import { createTreeLabelService } from './tree-labels.service.js';
 import { createTreeReservationService } from './tree-reservation.service.js';
 import { createTreeService } from './tree.service.js';
+import { createTripSolver } from './trip-plan-solver.js';
+import { createTripPlanService } from './trip-plan.service.js';
 import { createUserService } from './user.service.js';
 import { createWaiverService } from './waiver.service.js';
 import { createWorkdayService } from './workday.service.js';
@@ -51,6 +54,7 @@ export function createServices(deps: ServiceDeps) {
   const tokens = createAuthTokenService({ db, clock });
   const hasher = createPasswordHasher(config.PASSWORD_SCRYPT_LOG_N);
   const photos = createPhotoService({ db, store: createPhotoStore(config.UPLOADS_DIR) });
+  const fleet = createFleetService({ db });
   return {
     users,
     organisation,
@@ -75,6 +79,8 @@ export function createServices(deps: ServiceDeps) {
     tanks: createTankService({ db, clock }),
     brining: createTankBriningService({ db, clock }),
     readiness: createReadinessService({ db, clock, sites, stations }),
+    fleet,
+    tripPlans: createTripPlanService({ db, fleet, solver: createTripSolver() }),
   };
 }
 export type Services = ReturnType<typeof createServices>;

@@ -106,6 +106,15 @@ const routes: RouteCase[] = [
   { method: 'post', path: '/api/photos', expect: { ...STAFF, coordinator: 400, admin: 400 } },
   { method: 'get', path: `/api/photos/${NO_ID}`, expect: SIGNED_IN_404 },
   { method: 'get', path: `/api/photos/${NO_ID}/thumb`, expect: SIGNED_IN_404 },
+  { method: 'get', path: '/api/fleet', expect: SIGNED_IN },
+  { method: 'get', path: '/api/fleet/rule-of-thumb?lengthFt=16&beamFt=5', expect: SIGNED_IN },
+  { method: 'post', path: '/api/fleet', body: {}, expect: { ...STAFF, coordinator: 400, admin: 400 } },
+  { method: 'patch', path: `/api/fleet/${NO_ID}`, body: {}, expect: STAFF_404 },
+  { method: 'delete', path: `/api/fleet/${NO_ID}`, expect: STAFF_404 },
+  { method: 'post', path: '/api/trip-plans/solve', body: {}, expect: { ...STAFF, coordinator: 400, admin: 400 } },
+  { method: 'post', path: `/api/workdays/${NO_ID}/trip-plan`, body: {}, expect: STAFF_404 },
+  { method: 'get', path: `/api/workdays/${NO_ID}/trip-plan`, expect: STAFF_404 },
+  { method: 'put', path: `/api/workdays/${NO_ID}/trip-plan`, body: { runs: [] }, expect: STAFF_404 },
 ];
 
 let t: TestApp;

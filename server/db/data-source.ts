@@ -17,12 +17,18 @@ import { SalinityReading } from './entities/salinity-reading.entity.js';
 import { Tree } from './entities/tree.entity.js';
 import { TreeEvent } from './entities/tree-event.entity.js';
 import { Craft } from './entities/craft.entity.js';
+import { Campaign } from './entities/campaign.entity.js';
+import { Donation } from './entities/donation.entity.js';
+import { WebhookEvent } from './entities/webhook-event.entity.js';
+import { MonitoringVisit } from './entities/monitoring-visit.entity.js';
+import { TreeCheck } from './entities/tree-check.entity.js';
 import { TripPlan } from './entities/trip-plan.entity.js';
 import { User } from './entities/user.entity.js';
 import { migrations } from './migrations/index.js';
 
 export const entities = [User, AuthToken, Organisation, Site, Workday, WorkdayRole, Signup, VolunteerProfile, WaiverVersion, AuditLog, OutboxMessage,
-  Photo, CollectionBatch, Tank, SalinityReading, Tree, TreeEvent, Craft, TripPlan];
+  Photo, CollectionBatch, Tank, SalinityReading, Tree, TreeEvent, Craft, TripPlan,
+  Campaign, Donation, WebhookEvent, MonitoringVisit, TreeCheck];
 
 /** One DataSource per process; migrations run explicitly at start, never synchronize. */
 export function createDataSource(url: string): DataSource {

@@ -12,6 +12,11 @@ const toSettings = (o: Organisation): OrganisationSettings => ({
   contactEmail: o.contactEmail,
   windowWeights: o.windowWeights,
   nurseryRules: o.nurseryRules,
+  tripRules: o.tripRules,
+  currency: o.currency,
+  givingRules: o.givingRules,
+  volunteerHourValueCents: o.volunteerHourValueCents,
+  volunteerHourValueSource: o.volunteerHourValueSource,
 });
 
 export function createOrganisationService(deps: { db: DataSource }) {
@@ -22,8 +27,8 @@ export function createOrganisationService(deps: { db: DataSource }) {
       return toSettings(await load());
     },
     async publicView(): Promise<PublicOrganisation> {
-      const { name, isDemo, units, timeZone } = toSettings(await load());
-      return { name, isDemo, units, timeZone };
+      const { name, isDemo, units, timeZone, currency } = toSettings(await load());
+      return { name, isDemo, units, timeZone, currency };
     },
     async update(body: UpdateOrganisationBody): Promise<OrganisationSettings> {
       await repo.update({ id: 1 }, body);

@@ -44,7 +44,7 @@ export const useOrganisationStore = defineStore('organisation', () => {
 
   /** After an admin saves the settings, so the banner, top bar and units follow at once. */
   function setOrganisation(next: PublicOrganisation): void {
-    organisation.value = { name: next.name, isDemo: next.isDemo, units: next.units, timeZone: next.timeZone };
+    organisation.value = { name: next.name, isDemo: next.isDemo, units: next.units, timeZone: next.timeZone, currency: next.currency };
   }
 
   /** A length stored in metres, in the organisation's display units. */

@@ -14,7 +14,7 @@ describe('GET /api/organisation', () => {
   it('tells anyone the name, units, time zone and whether it is demo data, nothing private', async () => {
     const res = await request(t.app).get('/api/organisation');
     expect(res.status).toBe(200);
-    expect(res.body.organisation).toEqual({ name: expect.any(String), isDemo: expect.any(Boolean), units: expect.stringMatching(/^(ft|m)$/), timeZone: expect.any(String) });
+    expect(res.body.organisation).toEqual({ name: expect.any(String), isDemo: expect.any(Boolean), units: expect.stringMatching(/^(ft|m)$/), timeZone: expect.any(String), currency: 'usd' });
   });
 });
 

@@ -13,6 +13,7 @@ export const DEFAULT_ORGANISATION: PublicOrganisation = {
   isDemo: false,
   units: 'ft',
   timeZone: 'America/New_York',
+  currency: 'usd',
 };
 
 /** MSW for client tests: any request without a handler fails the test. Add handlers with `server.use(...)`. */

@@ -1,6 +1,6 @@
 import { Check, Column, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
 import type { NurseryRules } from '../../../shared/schemas/nursery.schema.js';
-import type { LengthUnit, WindowWeights } from '../../../shared/schemas/organisation.schema.js';
+import type { GivingRules, LengthUnit, TripRules, WindowWeights } from '../../../shared/schemas/organisation.schema.js';
 
 /** The one organisation an instance serves (single row, id 1). */
 @Entity({ name: 'organisation' })
@@ -35,6 +35,30 @@ export class Organisation {
   /** How tree readiness for a site is judged (see server/domain/nursery/readiness.ts). */
   @Column({ type: 'jsonb', name: 'nursery_rules', default: () => `'{"holdDays": 21, "crownRule": "mhhw", "salinityTolerancePpt": 2, "maxCrownSubmergedShare": 0.02}'` })
   nurseryRules: NurseryRules;
+
+  /** How trip plans are built (see server/domain/trips/); default written as PostgreSQL prints jsonb. */
+  @Column({
+    type: 'jsonb',
+    name: 'trip_rules',
+    default: () => `'{"potMassKg": 27, "loadMinutes": 10, "platedMargin": 1, "unloadMinutes": 5, "standardPersonKg": 84, "paddlecraftMargin": 0.7, "plantingMinutesPerTree": 20}'`,
+  })
+  tripRules: TripRules;
+
+  /** ISO 4217 code, lower case as the payments API writes it; one currency per organisation. */
+  @Column({ type: 'varchar', length: 3, default: 'usd' })
+  currency: string;
+
+  /** Card fee used for "cover the fees" (see shared/domain/fee-cover.ts). */
+  @Column({ type: 'jsonb', name: 'giving_rules', default: () => `'{"cardFeePercent": 2.9, "cardFeeFixedCents": 30}'` })
+  givingRules: GivingRules;
+
+  /** Value of one volunteer hour in cents, for reports. */
+  @Column({ type: 'integer', name: 'volunteer_hour_value_cents', default: 3180 })
+  volunteerHourValueCents: number;
+
+  /** Where the hourly value comes from, printed beside it in reports. */
+  @Column({ type: 'varchar', length: 200, name: 'volunteer_hour_value_source', default: 'Independent Sector, national value of a volunteer hour, 2022' })
+  volunteerHourValueSource: string;
 
   /** Marks seeded demo data, so the interface can say so plainly. */
   @Column({ type: 'boolean', name: 'is_demo', default: false })

@@ -1,5 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn, type Relation } from 'typeorm';
 import { CollectionBatch } from './collection-batch.entity.js';
+import { Donation } from './donation.entity.js';
 import { Site } from './site.entity.js';
 import { Tank } from './tank.entity.js';
 import { Workday } from './workday.entity.js';
@@ -69,6 +70,32 @@ export class Tree {
 
   @Column({ type: 'date', name: 'planted_on', nullable: true })
   plantedOn: string | null;
+
+  /** Bed elevation where it was planted, metres above the site station's MLLW. */
+  @Column({ type: 'double precision', name: 'planted_bed_elevation_m', nullable: true })
+  plantedBedElevationM: number | null;
+
+  /** The planting workday that put it in the ground, when there was one. */
+  @Index()
+  @Column({ type: 'uuid', name: 'planted_workday_id', nullable: true })
+  plantedWorkdayId: string | null;
+
+  @ManyToOne(() => Workday, { onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'planted_workday_id' })
+  plantedWorkday: Relation<Workday> | null;
+
+  /** The gift that sponsors this tree (one tree, one sponsor); released on refund. */
+  @Index()
+  @Column({ type: 'uuid', name: 'sponsor_donation_id', nullable: true })
+  sponsorDonationId: string | null;
+
+  @ManyToOne(() => Donation, { onDelete: 'SET NULL' })
+  @JoinColumn({ name: 'sponsor_donation_id' })
+  sponsorDonation: Relation<Donation> | null;
+
+  /** When the sponsor was told it was planted, so the news goes out once. */
+  @Column({ type: 'timestamptz', name: 'sponsor_told_planted_at', nullable: true })
+  sponsorToldPlantedAt: Date | null;
 
   @Column({ type: 'uuid', name: 'photo_id', nullable: true })
   photoId: string | null;

@@ -1,6 +1,6 @@
 import { http, HttpResponse } from 'msw';
 import { DEFAULT_NURSERY_RULES } from '@shared/schemas/nursery.schema';
-import type { OrganisationSettings, PublicOrganisation } from '@shared/schemas/organisation.schema';
+import { DEFAULT_GIVING_RULES, DEFAULT_TRIP_RULES, type OrganisationSettings, type PublicOrganisation } from '@shared/schemas/organisation.schema';
 import { DEFAULT_ORGANISATION, server } from '../../setup/client-setup';
 import { errorResponse } from './msw';
 
@@ -16,6 +16,10 @@ export function buildSettings(overrides: Partial<OrganisationSettings> = {}): Or
     contactEmail: 'hello@harbour-fringe.example.test',
     windowWeights: { duration: 1, lowWater: 1, weekend: 0.5, startHour: 0.5 },
     nurseryRules: DEFAULT_NURSERY_RULES,
+    tripRules: DEFAULT_TRIP_RULES,
+    givingRules: DEFAULT_GIVING_RULES,
+    volunteerHourValueCents: 3180,
+    volunteerHourValueSource: 'Independent Sector, national value of a volunteer hour, 2022',
     ...overrides,
   };
 }

@@ -19,6 +19,7 @@ import { tankRouter } from './tank.router.js';
 import { tideRouter } from './tide.router.js';
 import { treeRouter } from './tree.router.js';
 import { tripPlanRouter } from './trip-plan.router.js';
+import { tripSheetRouter } from './trip-sheet.router.js';
 import { userRouter, volunteerRouter } from './user.router.js';
 import { waiverRouter } from './waiver.router.js';
 import { workdayRouter } from './workday.router.js';
@@ -43,5 +44,6 @@ export function mountApi(app: Express, s: Services, deps: { db: DataSource; pass
   app.use('/api/photos', photoRouter({ photos: s.photos }));
   app.use('/api/fleet', fleetRouter({ fleet: s.fleet }));
   app.use('/api', tripPlanRouter({ tripPlans: s.tripPlans }));
+  app.use('/api', tripSheetRouter({ tripSheets: s.tripSheets }));
   app.use('/api', apiNotFound);
 }

@@ -30,6 +30,7 @@ import { createTreeReservationService } from './tree-reservation.service.js';
 import { createTreeService } from './tree.service.js';
 import { createTripSolver } from './trip-plan-solver.js';
 import { createTripPlanService } from './trip-plan.service.js';
+import { createTripSheetService } from './trip-sheet.service.js';
 import { createUserService } from './user.service.js';
 import { createWaiverService } from './waiver.service.js';
 import { createWorkdayService } from './workday.service.js';
@@ -81,6 +82,7 @@ export function createServices(deps: ServiceDeps) {
     readiness: createReadinessService({ db, clock, sites, stations }),
     fleet,
     tripPlans: createTripPlanService({ db, fleet, solver: createTripSolver() }),
+    tripSheets: createTripSheetService({ db }),
   };
 }
 export type Services = ReturnType<typeof createServices>;

@@ -1,5 +1,5 @@
 import { randomId } from '../support/ids.js';
-import { integer, stringMap, text, type FormObject } from './form-body.js';
+import { child, integer, stringMap, text, type FormObject } from './form-body.js';
 import { parseLineItems, type LineItem } from './line-items.js';
 import { invalidParam, missingParam, type StripeApiError } from './stripe-errors.js';
 
@@ -14,12 +14,15 @@ export interface CheckoutSession {
   created: number;
   currency: string;
   customer: null;
+  /** Filled in when the payer completes the page, as the hosted service does. */
+  customer_details: { email: string | null; name: string | null } | null;
   customer_email: string | null;
   expires_at: number;
   livemode: false;
   metadata: Record<string, string>;
   mode: CheckoutMode;
-  payment_intent: null;
+  /** Created when the payer pays; a plain id, as the API returns it unexpanded. */
+  payment_intent: string | null;
   payment_status: 'unpaid' | 'paid' | 'no_payment_required';
   status: 'open' | 'complete' | 'expired';
   success_url: string | null;
@@ -29,6 +32,11 @@ export interface CheckoutSession {
 export interface StoredSession {
   session: CheckoutSession;
   lineItems: LineItem[];
+  /**
+   * `payment_intent_data[metadata]`: like the hosted service, the session's own `metadata`
+   * is not copied to the payment and charge, only this is.
+   */
+  paymentMetadata: Record<string, string>;
 }
 
 /** One-off payments only: subscriptions and setup need saved prices and customers the fake lacks. */
@@ -64,6 +72,7 @@ export function createCheckoutSession(params: FormObject, baseUrl: string, nowSe
     created: nowSeconds,
     currency: parsed.items[0]?.currency ?? 'usd',
     customer: null,
+    customer_details: null,
     customer_email: text(params, 'customer_email') ?? null,
     expires_at: integer(params, 'expires_at') ?? nowSeconds + SESSION_LIFETIME_SECONDS,
     livemode: false,
@@ -75,5 +84,6 @@ export function createCheckoutSession(params: FormObject, baseUrl: string, nowSe
     success_url: text(params, 'success_url') ?? null,
     url: `${baseUrl}/pay/${id}`,
   };
-  return { ok: true, stored: { session, lineItems: parsed.items } };
+  const paymentMetadata = stringMap(child(params, 'payment_intent_data') ?? {}, 'metadata');
+  return { ok: true, stored: { session, lineItems: parsed.items, paymentMetadata } };
 }

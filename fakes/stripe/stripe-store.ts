@@ -1,5 +1,6 @@
 import type { StoredSession } from './checkout-session.js';
 import type { FormObject } from './form-body.js';
+import type { Charge, PaymentIntent, Refund } from './payment-objects.js';
 
 const MAX_RECORDS = 500;
 
@@ -14,6 +15,8 @@ export interface RecordedRequest {
 export interface StoredResponse {
   status: number;
   body: unknown;
+  /** Method, path and parameters of the first request, to refuse a key reused for another. */
+  request: string;
 }
 
 export interface StripeStore {
@@ -30,6 +33,11 @@ export interface StripeStore {
    */
   replay(key: string): StoredResponse | undefined;
   remember(key: string, response: StoredResponse): void;
+  savePayment(payment: { intent: PaymentIntent; charge: Charge }): void;
+  findIntent(id: string): PaymentIntent | undefined;
+  findCharge(id: string): Charge | undefined;
+  saveRefund(refund: Refund): void;
+  findRefund(id: string): Refund | undefined;
 }
 
 function pushCapped<T>(items: T[], item: T): void {
@@ -41,6 +49,10 @@ export function createStripeStore(): StripeStore {
   const requests: RecordedRequest[] = [];
   const sessions: StoredSession[] = [];
   const responses = new Map<string, StoredResponse>();
+  // Not capped: a charge must stay refundable, and a dev or test process sees few payments.
+  const intents = new Map<string, PaymentIntent>();
+  const charges = new Map<string, Charge>();
+  const refunds = new Map<string, Refund>();
   return {
     recordRequest: (request) => pushCapped(requests, request),
     requests: () => [...requests],
@@ -54,5 +66,13 @@ export function createStripeStore(): StripeStore {
       const oldest = responses.keys().next();
       if (responses.size > MAX_RECORDS && !oldest.done) responses.delete(oldest.value);
     },
+    savePayment({ intent, charge }) {
+      intents.set(intent.id, intent);
+      charges.set(charge.id, charge);
+    },
+    findIntent: (id) => intents.get(id),
+    findCharge: (id) => charges.get(id),
+    saveRefund: (refund) => void refunds.set(refund.id, refund),
+    findRefund: (id) => refunds.get(id),
   };
 }

@@ -13,9 +13,10 @@ export function escapeHtml(value: string): string {
 
 /**
  * Wraps a body in a complete page. The banner makes it obvious in a browser that this
- * is a local stand-in, so nobody mistakes it for the hosted service.
+ * is a local stand-in, so nobody mistakes it for the hosted service. `extraCss` holds one
+ * page's own rules, after the shared ones.
  */
-export function renderPage(title: string, body: string, banner: string): string {
+export function renderPage(title: string, body: string, banner: string, extraCss = ''): string {
   return `<!doctype html>
 <html lang="en">
 <head>
@@ -35,7 +36,7 @@ export function renderPage(title: string, body: string, banner: string): string 
   pre { white-space: pre-wrap; background: #fff; padding: .75rem; border: 1px solid #cdd8d2; }
   .visually-hidden { position: absolute; width: 1px; height: 1px; overflow: hidden; clip-path: inset(50%); white-space: nowrap; }
   iframe { width: 100%; min-height: 24rem; border: 1px solid #cdd8d2; background: #fff; }
-</style>
+${extraCss}</style>
 </head>
 <body>
 <p class="banner" role="note">${escapeHtml(banner)}</p>

@@ -44,6 +44,8 @@ export async function startLocalStack(config: Config, log: (s: string) => void, 
       mailInspectPort: portOf(config.MAIL_INSPECT_URL),
       oauthPort: portOf(config.GOOGLE_AUTH_URL),
       stripePort: portOf(config.STRIPE_API_URL),
+      // Signed payment events go to the app's webhook route, as the hosted service would send them.
+      stripeWebhook: { url: `${config.APP_URL.replace(/\/$/, '')}/api/webhooks/stripe`, secret: config.STRIPE_WEBHOOK_SECRET },
       log: (line) => log(`[fakes] ${line}`),
     });
   } catch (err) {

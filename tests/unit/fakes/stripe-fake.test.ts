@@ -94,6 +94,15 @@ describe('payments fake with the Stripe SDK', () => {
 
     expect(second.id).toBe(first.id);
   });
+
+  it('refuses an idempotency key reused with other parameters', async () => {
+    const idempotencyKey = `reuse-${Date.now()}`;
+    await stripe.checkout.sessions.create(workdayCheckout(), { idempotencyKey });
+
+    const other = stripe.checkout.sessions.create({ ...workdayCheckout(), customer_email: 'other@example.com' }, { idempotencyKey });
+
+    await expect(other).rejects.toMatchObject({ type: 'StripeIdempotencyError', statusCode: 400 });
+  });
 });
 
 describe('payments fake inspection and hosted page', () => {
@@ -124,7 +133,7 @@ describe('payments fake inspection and hosted page', () => {
     expect(sessions.slice(0, 2).map((s) => s.id)).toEqual([newer.id, older.id]);
   });
 
-  it('shows a placeholder checkout page for a session and 404 for an unknown one', async () => {
+  it('shows the checkout page with the total for a session and 404 for an unknown one', async () => {
     const session = await stripe.checkout.sessions.create(workdayCheckout());
 
     const page = await fetch(session.url ?? '');
@@ -132,8 +141,8 @@ describe('payments fake inspection and hosted page', () => {
 
     expect(page.status).toBe(200);
     const html = await page.text();
-    expect(html).toContain('not built yet');
-    expect(html).toContain('85.00 USD');
+    expect(html).toContain('Total 85.00 USD');
+    expect(html).toContain('<td>Propagule bag</td><td>3</td><td>75.00 USD</td>');
     expect(missing.status).toBe(404);
   });
 });

@@ -11,9 +11,12 @@ import { crewRouter } from './crew.router.js';
 import { fleetRouter } from './fleet.router.js';
 import { healthRouter } from './health.router.js';
 import { meRouter } from './me.router.js';
+import { monitoringRouter } from './monitoring.router.js';
 import { nurseryRouter } from './nursery.router.js';
 import { organisationRouter } from './organisation.router.js';
 import { photoRouter } from './photo.router.js';
+import { plantingRouter } from './planting.router.js';
+import { reportRouter } from './report.router.js';
 import { siteRouter } from './site.router.js';
 import { tankRouter } from './tank.router.js';
 import { tideRouter } from './tide.router.js';
@@ -41,6 +44,10 @@ export function mountApi(app: Express, s: Services, deps: { db: DataSource; pass
   app.use('/api', treeRouter({ batches: s.batches, trees: s.trees, bulk: s.treeBulk, labels: s.treeLabels }));
   app.use('/api', tankRouter({ tanks: s.tanks, brining: s.brining, bulk: s.treeBulk }));
   app.use('/api', nurseryRouter({ readiness: s.readiness, reservations: s.reservations }));
+  // '/workdays/:id/plantings' has two segments, so the workday router's '/:id' never catches it.
+  app.use('/api', plantingRouter({ plantings: s.plantings }));
+  app.use('/api', monitoringRouter({ monitoring: s.monitoring, monitoringDue: s.monitoringDue }));
+  app.use('/api/reports', reportRouter({ reports: s.reports }));
   app.use('/api/photos', photoRouter({ photos: s.photos }));
   app.use('/api/fleet', fleetRouter({ fleet: s.fleet }));
   app.use('/api', tripPlanRouter({ tripPlans: s.tripPlans }));

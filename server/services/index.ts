@@ -11,11 +11,15 @@ import { createCalendarService } from './calendar.service.js';
 import { createFleetService } from './fleet.service.js';
 import type { CrewNotifier } from './crew-notifier.js';
 import { createMeService } from './me.service.js';
+import { createMonitoringDueService } from './monitoring-due.service.js';
+import { createMonitoringService } from './monitoring.service.js';
 import { createOrganisationService } from './organisation.service.js';
 import { createPasswordHasher } from './password-hasher.js';
 import { createPhotoService } from './photo.service.js';
+import { createPlantingService } from './planting.service.js';
 import { createReadinessService } from './readiness.service.js';
 import { createReminderOptOutService } from './reminder-opt-out.service.js';
+import { createReportService } from './report.service.js';
 import { createRosterService } from './roster.service.js';
 import { createSignupService } from './signup.service.js';
 import { createSiteTideService } from './site-tide.service.js';
@@ -80,6 +84,10 @@ export function createServices(deps: ServiceDeps) {
     tanks: createTankService({ db, clock }),
     brining: createTankBriningService({ db, clock }),
     readiness: createReadinessService({ db, clock, sites, stations }),
+    plantings: createPlantingService({ db, clock }),
+    monitoring: createMonitoringService({ db, clock, photos }),
+    monitoringDue: createMonitoringDueService({ db, clock }),
+    reports: createReportService({ db, clock }),
     fleet,
     tripPlans: createTripPlanService({ db, fleet, solver: createTripSolver() }),
     tripSheets: createTripSheetService({ db }),

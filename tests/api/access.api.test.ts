@@ -117,6 +117,17 @@ const routes: RouteCase[] = [
   { method: 'put', path: `/api/workdays/${NO_ID}/trip-plan`, body: { runs: [] }, expect: STAFF_404 },
   { method: 'get', path: `/api/workdays/${NO_ID}/trip-plan/sheet.pdf`, expect: STAFF_404 },
   { method: 'get', path: `/api/workdays/${NO_ID}/trip-plan/float-plan.pdf`, expect: STAFF_404 },
+  { method: 'get', path: `/api/workdays/${NO_ID}/plantings`, expect: STAFF_404 },
+  { method: 'post', path: `/api/workdays/${NO_ID}/plantings`, body: { trees: [{ treeId: NO_ID }] }, expect: STAFF_404 },
+  { method: 'delete', path: `/api/workdays/${NO_ID}/plantings/${NO_ID}`, expect: STAFF_404 },
+  { method: 'post', path: '/api/monitoring-visits', body: {}, expect: { ...STAFF, coordinator: 400, admin: 400 } },
+  { method: 'get', path: '/api/monitoring-visits', expect: STAFF },
+  { method: 'get', path: `/api/monitoring-visits/${NO_ID}`, expect: STAFF_404 },
+  { method: 'get', path: `/api/monitoring-visits/${NO_ID}/lookup?tag=T-0001`, expect: STAFF_404 },
+  { method: 'put', path: `/api/monitoring-visits/${NO_ID}/checks/${NO_ID}`, body: { condition: 'alive' }, expect: STAFF_404 },
+  { method: 'get', path: '/api/monitoring/due', expect: STAFF },
+  ...['summary', 'hours', 'trees', 'survival', 'donations', 'summary.csv', 'hours.csv', 'trees.csv', 'survival.csv', 'donations.csv', 'report.pdf']
+    .map((name) => ({ method: 'get' as const, path: `/api/reports/${name}?from=2026-01-01&to=2026-01-31`, expect: STAFF })),
 ];
 
 let t: TestApp;

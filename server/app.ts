@@ -12,6 +12,7 @@ import { errorHandler } from './middleware/error-handler.js';
 import { requestLog } from './middleware/request-log.js';
 import { pgSession } from './middleware/session.js';
 import { mountApi } from './routes/index.js';
+import { stripeWebhookRouter } from './routes/webhook.router.js';
 import type { CrewNotifier } from './services/crew-notifier.js';
 import { createServices } from './services/index.js';
 
@@ -61,6 +62,8 @@ export function createApp(deps: AppDeps): App {
   app.disable('x-powered-by');
   app.use(requestLog({ enabled: config.LOG_REQUESTS === 'true', log }));
   app.use(helmet({ contentSecurityPolicy: { directives: { 'img-src': ["'self'", 'data:', 'blob:'] } } }));
+  // Payment webhooks need the raw body for their signature and have no session: before the JSON parser and CSRF.
+  app.use('/api/webhooks/stripe', stripeWebhookRouter({ webhooks: services.donationWebhooks }));
   app.use(express.json({ limit: '200kb' }));
   app.use(sessions.handler);
   app.use(passport.initialize());

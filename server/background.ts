@@ -12,8 +12,10 @@ import type { CrewNotifier } from './services/crew-notifier.js';
 import { createCrewNotifier } from './services/crew-notifier.service.js';
 import { createCrewReminders } from './services/crew-reminders.service.js';
 import { createOutboxSender } from './services/outbox-sender.service.js';
+import { createTideStationDirectory } from './adapters/tide-stations.js';
+import { createSponsorNewsService } from './services/sponsor-news.service.js';
 
-export const JOBS = { send: 'outbox-send', sweep: 'outbox-sweep', reminders: 'crew-reminders' } as const;
+export const JOBS = { send: 'outbox-send', sweep: 'outbox-sweep', reminders: 'crew-reminders', sponsorNews: 'sponsor-news' } as const;
 
 export interface BackgroundDeps {
   config: Config;
@@ -31,6 +33,8 @@ export interface Background {
   drain(): Promise<void>;
   /** Queues the reminders now due (the hourly job does the same); returns how many were new. */
   runReminders(): Promise<number>;
+  /** Matches waiting gifts to free nursery trees and queues "your tree is planted" news (every 10 minutes); returns the mails queued. */
+  runSponsorNews(): Promise<number>;
   stop(): Promise<void>;
 }
 
@@ -40,6 +44,7 @@ async function declareQueues(queue: JobQueue, retry: { limit: number; delaySecon
   await queue.createQueue({ name: JOBS.send, retryLimit: retry.limit, retryDelaySeconds: retry.delaySeconds, retryBackoff: true, expireInSeconds: 300 });
   await queue.createQueue({ name: JOBS.sweep, expireInSeconds: 120 });
   await queue.createQueue({ name: JOBS.reminders, expireInSeconds: 600 });
+  await queue.createQueue({ name: JOBS.sponsorNews, expireInSeconds: 600 });
 }
 
 export async function startBackground(deps: BackgroundDeps): Promise<Background> {
@@ -49,6 +54,7 @@ export async function startBackground(deps: BackgroundDeps): Promise<Background>
   const sender = createOutboxSender({ db, mailer: deps.mailer, clock, log });
   const settings = { appUrl: config.APP_URL, secret: config.SESSION_SECRET };
   const reminders = createCrewReminders({ ...settings, db, clock });
+  const sponsorNews = createSponsorNewsService({ db, stations: createTideStationDirectory(), clock, appUrl: config.APP_URL });
 
   async function sweep(): Promise<void> {
     const [ids, live] = await Promise.all([sender.pendingIds(), queue.liveKeys(JOBS.send)]);
@@ -74,6 +80,12 @@ export async function startBackground(deps: BackgroundDeps): Promise<Background>
     if (queued > 0) await drain();
     return queued;
   }
+  async function runSponsorNews(): Promise<number> {
+    await sponsorNews.matchWaitingGifts();
+    const queued = await sponsorNews.tellPlanted();
+    if (queued > 0) await drain();
+    return queued;
+  }
   /** Start-up and flush must not fail the caller: the sweeper catches up within a minute. */
   const quietly = (what: string, fn: () => Promise<unknown>) => fn().then(
     () => undefined,
@@ -90,10 +102,14 @@ export async function startBackground(deps: BackgroundDeps): Promise<Background>
     await runReminders();
   });
   await queue.schedule(JOBS.sweep, '* * * * *');
+  await queue.work(JOBS.sponsorNews, { pollingIntervalSeconds: 5 }, async () => {
+    await runSponsorNews();
+  });
   await queue.schedule(JOBS.reminders, '7 * * * *');
+  await queue.schedule(JOBS.sponsorNews, '*/10 * * * *');
   await quietly('start-up sweep', drain);
   await quietly('start-up reminders', runReminders);
 
   const notifier = createCrewNotifier({ ...settings, clock, flush: () => quietly('outbox flush', drain) });
-  return { notifier, drain, runReminders, stop: () => queue.stop() };
+  return { notifier, drain, runReminders, runSponsorNews, stop: () => queue.stop() };
 }

@@ -6,8 +6,10 @@ import type { Config } from '../config.js';
 import { apiNotFound } from '../middleware/error-handler.js';
 import type { Services } from '../services/index.js';
 import { authRouter } from './auth.router.js';
+import { campaignRouter } from './campaign.router.js';
 import { calendarRouter } from './calendar.router.js';
 import { crewRouter } from './crew.router.js';
+import { donationRouter } from './donation.router.js';
 import { fleetRouter } from './fleet.router.js';
 import { healthRouter } from './health.router.js';
 import { meRouter } from './me.router.js';
@@ -52,5 +54,7 @@ export function mountApi(app: Express, s: Services, deps: { db: DataSource; pass
   app.use('/api/fleet', fleetRouter({ fleet: s.fleet }));
   app.use('/api', tripPlanRouter({ tripPlans: s.tripPlans }));
   app.use('/api', tripSheetRouter({ tripSheets: s.tripSheets }));
+  app.use('/api/campaigns', campaignRouter({ campaigns: s.campaigns }));
+  app.use('/api/donations', donationRouter({ checkout: s.donationCheckout, admin: s.donationAdmin }));
   app.use('/api', apiNotFound);
 }

@@ -8,6 +8,7 @@ import { createAttendanceService } from './attendance.service.js';
 import { createAuthTokenService } from './auth-token.service.js';
 import { createAuthService } from './auth.service.js';
 import { createCalendarService } from './calendar.service.js';
+import { createGivingServices } from './donation-services.js';
 import { createFleetService } from './fleet.service.js';
 import type { CrewNotifier } from './crew-notifier.js';
 import { createMeService } from './me.service.js';
@@ -88,6 +89,7 @@ export function createServices(deps: ServiceDeps) {
     monitoring: createMonitoringService({ db, clock, photos }),
     monitoringDue: createMonitoringDueService({ db, clock }),
     reports: createReportService({ db, clock }),
+    ...createGivingServices(deps),
     fleet,
     tripPlans: createTripPlanService({ db, fleet, solver: createTripSolver() }),
     tripSheets: createTripSheetService({ db }),

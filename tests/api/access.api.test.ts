@@ -128,6 +128,17 @@ const routes: RouteCase[] = [
   { method: 'get', path: '/api/monitoring/due', expect: STAFF },
   ...['summary', 'hours', 'trees', 'survival', 'donations', 'summary.csv', 'hours.csv', 'trees.csv', 'survival.csv', 'donations.csv', 'report.pdf']
     .map((name) => ({ method: 'get' as const, path: `/api/reports/${name}?from=2026-01-01&to=2026-01-31`, expect: STAFF })),
+  { method: 'get', path: '/api/campaigns', expect: ALL_OK },
+  { method: 'get', path: '/api/campaigns/manage', expect: ADMIN },
+  { method: 'get', path: `/api/campaigns/${NO_ID}`, expect: ALL_404 },
+  { method: 'post', path: '/api/campaigns', body: {}, expect: { ...ADMIN, admin: 400 } },
+  { method: 'patch', path: `/api/campaigns/${NO_ID}`, body: {}, expect: { ...ADMIN, admin: 404 } },
+  { method: 'post', path: '/api/donations/checkout', body: {}, expect: { anon: 400, volunteer: 400, coordinator: 400, admin: 400 } },
+  { method: 'get', path: `/api/donations/thanks/cs_test_${'0'.repeat(40)}`, expect: ALL_404 },
+  { method: 'get', path: '/api/donations', expect: ADMIN },
+  { method: 'get', path: '/api/donations/export.csv', expect: ADMIN },
+  { method: 'post', path: `/api/donations/${NO_ID}/refund`, expect: { ...ADMIN, admin: 404 } },
+  { method: 'post', path: '/api/webhooks/stripe', body: {}, expect: { anon: 400, volunteer: 400, coordinator: 400, admin: 400 } },
 ];
 
 let t: TestApp;

@@ -65,9 +65,12 @@ export function createTreeService(deps: { db: DataSource; clock: () => Date; pho
         const [tree] = await lockTrees(tx, [id]);
         if (!tree) throw new NotFoundError('Tree');
         await deps.photos.requireExists(tx, body.photoId);
-        await tx.getRepository(Tree).update({ id }, body);
+        // The note is not a column of the tree: it only explains the change in the history line.
+        const { note, ...changes } = body;
+        await tx.getRepository(Tree).update({ id }, changes);
         const healthy = body.healthy ?? null;
-        await tx.getRepository(TreeEvent).insert({ treeId: id, kind: 'note', at: deps.clock(), byId: userId, healthy, photoId: body.photoId ?? null, note: changeNote(body) });
+        const line = [changeNote(changes), note].filter(Boolean).join(': ');
+        await tx.getRepository(TreeEvent).insert({ treeId: id, kind: 'note', at: deps.clock(), byId: userId, healthy, photoId: body.photoId ?? null, note: line });
         return (await treeRows(tx, [id]))[0]!;
       });
     },

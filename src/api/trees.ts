@@ -5,14 +5,16 @@ import {
   PhotoDto,
   SiteReadinessDto,
   TreeDetail,
+  TreeReadinessDto,
   TreeRow,
   type BulkMoveBody,
   type CreateBatchBody,
   type ImportBatchBody,
   type MeasurementBody,
   type TreeStage,
+  type UpdateTreeBody,
 } from '@shared/schemas/nursery.schema';
-import { get, post, postForm, queryString } from './http';
+import { get, patch, post, postForm, queryString } from './http';
 
 const TreesResponse = z.object({ trees: z.array(TreeRow), total: z.number() });
 export type TreePage = z.infer<typeof TreesResponse>;
@@ -48,6 +50,16 @@ export async function recordMeasurement(id: string, body: MeasurementBody): Prom
   return (await post(`${treePath(id)}/measurements`, body, TreeResponse)).tree;
 }
 
+/** Coordinators and admins: pot details, health (with a note for the history) or photo. */
+export async function updateTree(id: string, body: UpdateTreeBody): Promise<TreeRow> {
+  return (await patch(treePath(id), body, TreeResponse)).tree;
+}
+
+/** Everyone signed in: up to 500 trees standing in one tank, in tag order (for a measurement round). */
+export async function listTreesInTank(tankId: string): Promise<TreeRow[]> {
+  return (await get(`/api/trees${queryString({ tankId, pageSize: '500' })}`, TreesResponse)).trees;
+}
+
 /** Coordinators and admins: all listed trees move, or none. */
 export function moveTrees(body: BulkMoveBody): Promise<z.infer<typeof MoveResponse>> {
   return post('/api/trees/bulk/move', body, MoveResponse);
@@ -77,9 +89,19 @@ export function fetchSiteReadiness(siteId: string): Promise<SiteReadinessDto> {
   return get(`/api/sites/${encodeURIComponent(siteId)}/readiness`, SiteReadinessDto);
 }
 
+/** Everyone signed in: one tree against one site (left out: its tank's target site). */
+export function fetchTreeReadiness(treeId: string, siteId?: string): Promise<TreeReadinessDto> {
+  return get(`${treePath(treeId)}/readiness${queryString({ siteId })}`, TreeReadinessDto);
+}
+
 /** Coordinators and admins: one image, checked by content on the server. */
 export async function uploadPhoto(file: File): Promise<PhotoDto> {
   const form = new FormData();
   form.append('photo', file);
   return (await postForm('/api/photos', form, PhotoResponse)).photo;
+}
+
+/** The small JPEG the server makes of every uploaded photo. */
+export function photoThumbPath(photoId: string): string {
+  return `/api/photos/${encodeURIComponent(photoId)}/thumb`;
 }

@@ -1,5 +1,5 @@
 import { reactive, ref, type Ref } from 'vue';
-import { BatchInfoBody, type ImportPreview } from '@shared/schemas/nursery.schema';
+import { BatchInfoBody, type ImportPreview, type PhotoDto } from '@shared/schemas/nursery.schema';
 import { commitImport, createBatch, previewImport, type CreatedBatch } from '@/api/trees';
 import { errorMessage } from '@/utils/error-message';
 import { numberOrUndefined } from '@/utils/nursery';
@@ -13,6 +13,8 @@ export interface BatchForm {
   notes: string;
   count: string;
   csv: string;
+  /** Uploaded as soon as it is chosen; the batch keeps its id. */
+  photo: PhotoDto | null;
 }
 
 /** A new collection batch, typed (count of fresh trees) or imported from CSV after a preview. */
@@ -26,7 +28,7 @@ export function useBatchEntry(): {
   check: () => Promise<void>;
   commit: () => Promise<void>;
 } {
-  const form = reactive<BatchForm>({ collectedOn: '', place: '', latitude: '', longitude: '', collector: '', notes: '', count: '10', csv: '' });
+  const form = reactive<BatchForm>({ collectedOn: '', place: '', latitude: '', longitude: '', collector: '', notes: '', count: '10', csv: '', photo: null });
   const created = ref<CreatedBatch | null>(null);
   const preview = ref<ImportPreview | null>(null);
   const messages = { validation_failed: 'Check the batch details: date and place are needed, and both coordinates or neither.' };
@@ -55,6 +57,7 @@ export function useBatchEntry(): {
       longitude: numberOrUndefined(form.longitude),
       collector: form.collector,
       notes: form.notes,
+      ...(form.photo && { photoId: form.photo.id }),
     };
   }
 

@@ -1,6 +1,6 @@
 import { ref, type Ref } from 'vue';
-import type { NurseryTasksDto, ReadingBody, ReadingDto, TankDto } from '@shared/schemas/nursery.schema';
-import { addReading, fetchNurseryTasks, listTanks } from '@/api/tanks';
+import type { CreateTankBody, NurseryTasksDto, ReadingBody, ReadingDto, TankDto } from '@shared/schemas/nursery.schema';
+import { addReading, createTank, fetchNurseryTasks, listTanks, updateTank } from '@/api/tanks';
 import { useAsyncAction } from './useAsyncAction';
 
 /** The tanks with their latest salinity, and today's water swaps across them. */
@@ -11,6 +11,8 @@ export function useTanks(): {
   error: Ref<string | null>;
   reload: () => Promise<void>;
   logReading: (tankId: string, body: ReadingBody) => Promise<ReadingDto | undefined>;
+  /** A new tank (`id` null) or changes to one; throws ApiError for the form to show. */
+  saveTank: (id: string | null, body: CreateTankBody) => Promise<TankDto>;
 } {
   const tanks = ref<TankDto[]>([]);
   const tasks = ref<NurseryTasksDto | null>(null);
@@ -29,5 +31,12 @@ export function useTanks(): {
     return reading;
   }
 
-  return { tanks, tasks, loading, error, reload, logReading };
+  async function saveTank(id: string | null, body: CreateTankBody): Promise<TankDto> {
+    const tank = id === null ? await createTank(body) : await updateTank(id, body);
+    // Not awaited: the form that asked must still be mounted to hear that it saved.
+    void reload();
+    return tank;
+  }
+
+  return { tanks, tasks, loading, error, reload, logReading, saveTank };
 }

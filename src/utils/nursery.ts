@@ -25,7 +25,38 @@ export const STAGE_COLOURS: Record<TreeStage, { bg: string; fg: string }> = {
   lost: { bg: '#B04A34', fg: '#FFFFFF' },
 };
 
-const LITRES_PER_US_GALLON = 3.785411784;
+/** Exactly 231 cubic inches, 3.785411784 L, to the US liquid gallon (NIST Handbook 44, Appendix C). */
+export const LITRES_PER_US_GALLON = 3.785411784;
+
+export type VolumeUnit = 'L' | 'gal';
+
+/** The unit a tank volume is typed in by default: US gallons where lengths are in feet. */
+export function volumeUnitFor(units: LengthUnit): VolumeUnit {
+  return units === 'ft' ? 'gal' : 'L';
+}
+
+/**
+ * A volume typed in `unit`, in litres to 0.01 L (the API stores litres).
+ * @example toLitres(5, 'gal') // 18.93
+ */
+export function toLitres(value: number, unit: VolumeUnit): number {
+  return Math.round((unit === 'gal' ? value * LITRES_PER_US_GALLON : value) * 100) / 100;
+}
+
+/** @example fromLitres(18.93, 'gal') // 5 */
+export function fromLitres(litres: number, unit: VolumeUnit): number {
+  return Math.round((unit === 'gal' ? litres / LITRES_PER_US_GALLON : litres) * 100) / 100;
+}
+
+/**
+ * A tank volume in both units, the organisation's first.
+ * @example formatVolumeBoth(378.54, 'ft') // "100 gal (378.5 L)"
+ */
+export function formatVolumeBoth(litres: number, units: LengthUnit): string {
+  const l = `${litres.toLocaleString('en-US', { maximumFractionDigits: 1 })} L`;
+  const gal = formatVolume(litres, 'ft');
+  return units === 'ft' ? `${gal} (${l})` : `${l} (${gal})`;
+}
 
 /**
  * A tank volume in the organisation's units: US gallons where lengths are in feet, else litres.
@@ -59,4 +90,14 @@ export function numberOrUndefined(text: string): number | undefined {
   if (text.trim() === '') return undefined;
   const n = Number(text.trim().replace(',', '.'));
   return Number.isFinite(n) ? n : undefined;
+}
+
+/** A share of time as a whole percentage. @example formatShare(0.2741) // "27%" */
+export function formatShare(share: number): string {
+  return `${Math.round(share * 100)}%`;
+}
+
+/** A date-time as the day it fell on, for tables and history. */
+export function formatTakenOn(iso: string): string {
+  return new Date(iso).toLocaleDateString('en-GB', { day: 'numeric', month: 'short', year: 'numeric' });
 }

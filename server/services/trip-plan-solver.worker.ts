@@ -1,7 +1,21 @@
-/** Worker thread entry: solves one trip instance off the main event loop (see trip-plan-solver.ts). */
-import { parentPort, workerData } from 'node:worker_threads';
-import { instanceFromJson, planToJson, solveTripPlan, type TripInstanceJson } from '../domain/trips/index.js';
+/** Worker thread entry: solves trip plans and estimates days one at a time off the main event loop (see trip-plan-solver.ts). */
+import { parentPort } from 'node:worker_threads';
+import { dayCapacity, initTripSolver, instanceFromJson, planToJson, solveTripPlan } from '../domain/trips/index.js';
+import type { TripJob, TripJobResult } from './trip-plan-solver.js';
 
-const { instance, timeLimitSeconds } = workerData as { instance: TripInstanceJson; timeLimitSeconds: number };
-const plan = await solveTripPlan(instanceFromJson(instance), { timeLimitSeconds });
-parentPort?.postMessage(planToJson(plan));
+// Load the HiGHS Wasm while waiting for the first plan; a failure here shows up on that plan.
+initTripSolver().catch(() => undefined);
+
+async function answer(job: TripJob): Promise<TripJobResult> {
+  if (job.kind === 'capacity') return { kind: 'capacity', capacity: dayCapacity(job.input) };
+  const plan = await solveTripPlan(instanceFromJson(job.instance), { timeLimitSeconds: job.timeLimitSeconds });
+  return { kind: 'solve', plan: planToJson(plan) };
+}
+
+parentPort?.on('message', async ({ id, input }: { id: number; input: TripJob }) => {
+  try {
+    parentPort?.postMessage({ id, output: await answer(input) });
+  } catch (error) {
+    parentPort?.postMessage({ id, error: error instanceof Error ? error.message : String(error) });
+  }
+});

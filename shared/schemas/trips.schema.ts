@@ -53,7 +53,7 @@ export type RuleOfThumbQuery = z.infer<typeof RuleOfThumbQuery>;
 export const RuleOfThumb = z.object({ persons: z.number().int(), note: z.string() });
 export type RuleOfThumb = z.infer<typeof RuleOfThumb>;
 
-const Instant = z.iso.datetime({ offset: true, message: 'must be an ISO 8601 date-time' });
+export const Instant = z.iso.datetime({ offset: true, message: 'must be an ISO 8601 date-time' });
 const Id = z.string().trim().min(1, { message: 'is required' }).max(100);
 
 export const TripRoute = z.object({
@@ -73,6 +73,11 @@ export const TripCraftInput = z.object({
   draftM: z.number().min(0).max(5).nullable().optional(),
   needsOperator: z.boolean(),
   ownerId: Id.nullable().optional(),
+  /**
+   * Whether `maxLoadKg` is a capacity plate (the plated margin applies) or the maker's figure
+   * (the paddlecraft margin). Left out, skiffs and operator-run craft count as plated.
+   */
+  plated: z.boolean().nullable().optional(),
 });
 
 export const TripPersonInput = z.object({
@@ -82,7 +87,26 @@ export const TripPersonInput = z.object({
   guardianId: Id.nullable().optional(),
 });
 
-const uniqueIds = (items: readonly { id: string }[]) => new Set(items.map((i) => i.id)).size === items.length;
+export const uniqueIds = (items: readonly { id: string }[]) => new Set(items.map((i) => i.id)).size === items.length;
+
+export const LoadMarginInput = z.object({
+  paddlecraft: z.number().positive({ message: 'must be more than 0' }).max(1, { message: 'must be at most 1' }),
+  plated: z.number().positive({ message: 'must be more than 0' }).max(1, { message: 'must be at most 1' }),
+});
+
+export const PotMass = positive(500, 'kg');
+export const Minutes = z.number({ message: 'must be a number' }).min(0).max(600);
+export const StandardPersonKg = z.number({ message: 'must be a number' }).min(40, { message: 'must be at least 40 kg' }).max(200, { message: 'must be at most 200 kg' });
+
+/**
+ * The pots to take out: `count` pots of `massKg` each, except that `masses` may list the
+ * recorded mass of individual pots (at most `count`; e.g. each reserved tree's filled pot). The
+ * planner groups masses into a few classes and counts each pot at the heaviest of its class, so
+ * no run is loaded past its margin; each run then lists its pots' masses (`potMassesKg`).
+ */
+export const TripPotsInput = z
+  .object({ count: count(0, 2000), massKg: PotMass, masses: z.array(PotMass).max(2000).optional() })
+  .refine((p) => (p.masses?.length ?? 0) <= p.count, { message: 'lists more pot masses than pots', path: ['masses'] });
 
 /** A self-contained instance for `POST /api/trip-plans/solve`. */
 export const TripInstanceBody = z
@@ -90,26 +114,26 @@ export const TripInstanceBody = z
     window: z.object({ start: Instant, end: Instant }),
     route: TripRoute,
     /** Minutes one pair of planters needs per tree; 0 means planting is not limited. */
-    plantingMinutesPerTree: z.number({ message: 'must be a number' }).min(0).max(600),
-    loadMargin: z
-      .object({
-        paddlecraft: z.number().positive({ message: 'must be more than 0' }).max(1, { message: 'must be at most 1' }),
-        plated: z.number().positive({ message: 'must be more than 0' }).max(1, { message: 'must be at most 1' }),
-      })
-      .optional(),
+    plantingMinutesPerTree: Minutes,
+    loadMargin: LoadMarginInput.optional(),
+    /** Weight counted for a person who gave none; default 84 kg. */
+    standardPersonKg: StandardPersonKg.optional(),
     craft: z.array(TripCraftInput).max(60, { message: 'at most 60 craft' }).refine(uniqueIds, { message: 'craft ids must be unique' }),
     people: z.array(TripPersonInput).max(400, { message: 'at most 400 people' }).refine(uniqueIds, { message: 'person ids must be unique' }),
-    pots: z.object({ count: count(0, 2000), massKg: positive(500, 'kg') }),
+    pots: TripPotsInput,
   })
   .refine((b) => Date.parse(b.window.end) > Date.parse(b.window.start), { message: 'must be after the start', path: ['window', 'end'] });
 export type TripInstanceBody = z.infer<typeof TripInstanceBody>;
 
-/** `POST /api/workdays/:id/trip-plan`: anything left out comes from the site and the defaults. */
+/**
+ * `POST /api/workdays/:id/trip-plan`: anything left out comes from the site and the
+ * organisation's trip settings. `potMassKg` is the mass of a pot whose tree has none recorded.
+ */
 export const BuildTripPlanBody = z
   .object({
     route: TripRoute.optional(),
-    plantingMinutesPerTree: z.number({ message: 'must be a number' }).min(0).max(600).optional(),
-    potMassKg: positive(500, 'kg').optional(),
+    plantingMinutesPerTree: Minutes.optional(),
+    potMassKg: PotMass.optional(),
   })
   .strict();
 export type BuildTripPlanBody = z.infer<typeof BuildTripPlanBody>;
@@ -122,6 +146,8 @@ export const TripRunInput = z.object({
   returnAt: Instant,
   people: z.array(Id).max(100),
   pots: count(0, 2000),
+  /** The mass of each pot aboard; left out (or not one per pot), the server hands out the ready pots. */
+  potMassesKg: z.array(PotMass).max(500).optional(),
   /** Informational: recomputed from the manifest when saved. */
   loadKg: z.number().optional(),
   loadShare: z.number().optional(),

@@ -1,4 +1,4 @@
-import { computed, reactive, ref, type ComputedRef, type Ref } from 'vue';
+import { computed, getCurrentInstance, provide, reactive, ref, type ComputedRef, type Ref } from 'vue';
 import type { Site } from '@shared/schemas/site.schema';
 import { CreateWorkdayBody, UpdateWorkdayBody, type WorkdayDto } from '@shared/schemas/workday.schema';
 import { listSites } from '@/api/sites';
@@ -17,6 +17,7 @@ import {
   type WorkdayPrefill,
 } from '@/utils/workday-form';
 import { useAsyncAction } from './useAsyncAction';
+import { DAY_CAPACITY_KEY, useDayCapacity, type DayCapacityState } from './useDayCapacity';
 import { useFormSubmit } from './useFormSubmit';
 
 /** How saving ends: a draft, published, or (editing) the status it already has. */
@@ -41,6 +42,8 @@ export interface WorkdayFormState {
   crewNotice: ComputedRef<string[]>;
   /** Resolves to the saved workday's id, or null when it was not saved (the errors say why). */
   save: (mode: WorkdaySaveMode) => Promise<string | null>;
+  /** What the chosen site, day and times can plant and the crew per role it needs (also provided to the crew section). */
+  dayCapacity: DayCapacityState;
 }
 
 const MESSAGES = {
@@ -63,6 +66,8 @@ export function useWorkdayForm(workdayId: string | null, prefill: WorkdayPrefill
   const ready = ref(false);
   const site = computed(() => sites.value.find((s) => s.id === form.siteId) ?? null);
   const timeZone = computed(() => site.value?.timeZone ?? workday.value?.site.timeZone ?? organisation.timeZone);
+  const dayCapacity = useDayCapacity({ form, timeZone, saved: workday });
+  if (getCurrentInstance()) provide(DAY_CAPACITY_KEY, dayCapacity);
 
   const { loading, error: loadError, run } = useAsyncAction(async () => {
     if (!organisation.loaded) await organisation.load();
@@ -137,5 +142,5 @@ export function useWorkdayForm(workdayId: string | null, prefill: WorkdayPrefill
     return savedId.value;
   }
 
-  return { form, sites, site, timeZone, workday, ready, loading, loadError, load, errors, formError, saving: submitting, crewNotice, save };
+  return { form, sites, site, timeZone, workday, ready, loading, loadError, load, errors, formError, saving: submitting, crewNotice, save, dayCapacity };
 }

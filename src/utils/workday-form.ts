@@ -105,6 +105,17 @@ export function roleCapsBody(form: WorkdayForm): RoleCapBody {
     .filter((r) => Number.isNaN(r.capacity) || r.capacity !== 0);
 }
 
+/**
+ * Turns on per-role caps set to the day's estimated needs (0: the role is not offered) and the
+ * total cap to their sum, so the two agree.
+ */
+export function applyRoleNeeds(form: WorkdayForm, needs: Record<CrewRole, number>): void {
+  form.capEachRole = true;
+  for (const role of CrewRole.options) form.roleCaps[role] = needs[role] > 0 ? String(needs[role]) : '';
+  const total = CrewRole.options.reduce((n, role) => n + Math.max(0, needs[role]), 0);
+  if (total > 0) form.capacity = String(total);
+}
+
 /** Start and end as ISO UTC; the end is on the same day as the start (workdays are daylight work). */
 export function formSpan(form: WorkdayForm, timeZone: string): { startsAt: string; endsAt: string } {
   return { startsAt: localToIso(form.date, form.startTime, timeZone), endsAt: localToIso(form.date, form.endTime, timeZone) };

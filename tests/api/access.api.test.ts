@@ -115,6 +115,8 @@ const routes: RouteCase[] = [
   { method: 'post', path: `/api/workdays/${NO_ID}/trip-plan`, body: {}, expect: STAFF_404 },
   { method: 'get', path: `/api/workdays/${NO_ID}/trip-plan`, expect: STAFF_404 },
   { method: 'put', path: `/api/workdays/${NO_ID}/trip-plan`, body: { runs: [] }, expect: STAFF_404 },
+  { method: 'post', path: '/api/trip-plans/capacity', body: {}, expect: { ...STAFF, coordinator: 400, admin: 400 } },
+  { method: 'get', path: `/api/workdays/${NO_ID}/capacity`, expect: STAFF_404 },
   { method: 'get', path: `/api/workdays/${NO_ID}/trip-plan/sheet.pdf`, expect: STAFF_404 },
   { method: 'get', path: `/api/workdays/${NO_ID}/trip-plan/float-plan.pdf`, expect: STAFF_404 },
   { method: 'get', path: `/api/workdays/${NO_ID}/plantings`, expect: STAFF_404 },

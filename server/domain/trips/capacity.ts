@@ -24,9 +24,13 @@ export interface DayCapacityInput {
   route: TripInstance['route'];
   craft: readonly TripCraft[];
   plantingMinutesPerTree: number;
+  /** Mass of a pot with none recorded. */
   potMassKg: number;
+  /** Recorded masses of the trees' pots (see `TripPots.masses`). */
+  potMassesKg?: readonly number[];
   loadMargin?: LoadMargin;
-  /** Trees ready for the day; default: as many as the day can take. */
+  standardPersonKg?: number;
+  /** Trees ready for the day; default: the recorded pots if any, else as many as the day can take. */
   treesAvailable?: number;
   /** Planters to assume; default: the number that plants the most trees (fewest on a tie). */
   planters?: number;
@@ -45,6 +49,10 @@ export interface DayCapacity {
   roles: Record<CrewRole, number>;
   /** Craft the day uses. */
   craftUsed: string[];
+  /** Runs of the plan behind the figures. */
+  runs: number;
+  /** When its last pot lands (epoch ms); null when none can. */
+  lastLandingAt: number | null;
 }
 
 /** One skipper per craft (owner, operator or paddler) and `planters` planters, all standard weight. */
@@ -60,8 +68,10 @@ function standIns(craft: readonly TripCraft[], planters: number): TripPerson[] {
 function plan(input: DayCapacityInput, planters: number, options: TripOptions, thorough: boolean): { ctx: TripContext; draft: Draft } {
   const people = standIns(input.craft, planters);
   const transportMax = input.craft.reduce((n, c) => n + Math.max(0, c.potSlots) * 200, 0);
-  const count = Math.min(input.treesAvailable ?? transportMax, transportMax);
-  const instance: TripInstance = { ...input, people, pots: { count, massKg: input.potMassKg } };
+  const count = Math.min(input.treesAvailable ?? input.potMassesKg?.length ?? transportMax, transportMax);
+  const masses = input.potMassesKg?.length ? { masses: input.potMassesKg } : {};
+  const { window, route, craft, plantingMinutesPerTree, loadMargin, standardPersonKg } = input;
+  const instance: TripInstance = { window, route, craft, plantingMinutesPerTree, loadMargin, standardPersonKg, people, pots: { count, massKg: input.potMassKg, ...masses } };
   const ctx = buildContext(instance, options);
   return { ctx, draft: thorough ? heuristicDraft(ctx) : fewerRuns(ctx, settlePots(ctx, packCrews(ctx, assignCrews(ctx)))) };
 }
@@ -88,10 +98,12 @@ export function dayCapacity(input: DayCapacityInput, options: TripOptions = {}):
   const best = bestPlan(input, options);
   const { ctx, draft } = best;
   const transport = buildContext({ ...ctx.instance, plantingMinutesPerTree: 0 }, options);
-  const transportPots = draftScore(transport, settlePots(transport, { crews: draft.crews, pots: draft.pots })).pots;
+  const transportPots = draftScore(transport, settlePots(transport, { crews: draft.crews, pots: draft.pots, mix: draft.mix })).pots;
   const arrivals = draftArrivals(ctx, draft);
   const plantingTrees = arrivals.length ? plantingSlots(ctx, arrivals, Math.min(...arrivals)) : 0;
-  return { trees: best.trees, transportPots, plantingTrees, ...roles(ctx, draft, Math.max(0, input.shoreCrew ?? 2)) };
+  const score = draftScore(ctx, draft);
+  const crew = roles(ctx, draft, Math.max(0, input.shoreCrew ?? 2));
+  return { trees: best.trees, transportPots, plantingTrees, ...crew, runs: score.runs, lastLandingAt: score.lastLandingAt };
 }
 
 /**

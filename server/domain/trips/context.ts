@@ -11,6 +11,7 @@
  * and brings its whole roster back when the window closes, so its `returnAt` is
  * `max(end, ready) + travel`.
  */
+import { hasPotMasses, potClasses, type PotClass } from './pot-classes.js';
 import type { LoadMargin, TripCraft, TripInstance, TripOptions, TripPerson } from './types.js';
 
 /**
@@ -40,7 +41,7 @@ const MAX_RUNS_PER_CRAFT = 200;
 export interface CraftInfo {
   craft: TripCraft;
   index: number;
-  /** Skiffs and operator-run craft carry a plate; the rest use the paddlecraft margin. */
+  /** Rated by a capacity plate (see `isPlated`); else the paddlecraft margin applies. */
   plated: boolean;
   /** margin × maxLoadKg. */
   capKg: number;
@@ -71,14 +72,23 @@ export interface TripContext {
   craftById: Map<string, CraftInfo>;
   people: PersonInfo[];
   personById: Map<string, PersonInfo>;
+  /** Pot mass classes, lightest first (see `pot-classes.ts`); one class when all pots weigh the same. */
+  potClasses: PotClass[];
+  /** Whether the instance gives per-pot masses (runs then list their pots' masses). */
+  perPotMasses: boolean;
 }
 
 const positive = (n: number | null | undefined): n is number => typeof n === 'number' && Number.isFinite(n) && n > 0;
 
+/**
+ * Whether a craft's rating is a capacity plate: as the craft says when it says (the fleet's
+ * `hasCapacityPlate`); otherwise skiffs and operator-run craft are taken to carry one.
+ */
+export const isPlated = (craft: TripCraft) => (typeof craft.plated === 'boolean' ? craft.plated : craft.kind === 'skiff' || craft.needsOperator);
+
 /** The load margin that applies to a craft (see `DEFAULT_LOAD_MARGIN`). */
 export function marginFor(craft: TripCraft, margin: LoadMargin = DEFAULT_LOAD_MARGIN): number {
-  const plated = craft.kind === 'skiff' || craft.needsOperator;
-  return Math.min(1, Math.max(0, plated ? margin.plated : margin.paddlecraft));
+  return Math.min(1, Math.max(0, isPlated(craft) ? margin.plated : margin.paddlecraft));
 }
 
 /** Whether a person holds the operator skill (`operator`, or the sign-up form's `boat-operator`). */
@@ -94,14 +104,19 @@ function craftInfo(instance: TripInstance, craft: TripCraft, index: number): Cra
   const room = instance.window.end - instance.window.start - travelMs - unloadMs;
   let maxRuns = 0;
   if (Number.isFinite(room) && room >= 0) maxRuns = cycleMs > 0 ? Math.floor(room / cycleMs) + 1 : MAX_RUNS_PER_CRAFT;
-  maxRuns = Math.min(maxRuns, MAX_RUNS_PER_CRAFT, instance.pots.count + 1);
-  const plated = craft.kind === 'skiff' || craft.needsOperator;
-  return { craft, index, plated, capKg, travelMs, cycleMs, maxRuns };
+  maxRuns = Math.min(maxRuns, MAX_RUNS_PER_CRAFT, Math.max(0, Math.floor(instance.pots.count)) + 1);
+  return { craft, index, plated: isPlated(craft), capKg, travelMs, cycleMs, maxRuns };
 }
 
-/** Precomputes craft and person facts; `options.standardPersonKg` fills missing weights. */
+/** The weight counted for a person who gave none: the instance's, else the options', else the default. */
+export function standardWeight(instance: TripInstance, options: TripOptions = {}): number {
+  if (positive(instance.standardPersonKg)) return instance.standardPersonKg;
+  return positive(options.standardPersonKg) ? options.standardPersonKg : DEFAULT_STANDARD_PERSON_KG;
+}
+
+/** Precomputes craft, person and pot facts; `standardWeight` fills missing weights. */
 export function buildContext(instance: TripInstance, options: TripOptions = {}): TripContext {
-  const standard = positive(options.standardPersonKg) ? options.standardPersonKg : DEFAULT_STANDARD_PERSON_KG;
+  const standard = standardWeight(instance, options);
   const crafts = instance.craft.map((c, i) => craftInfo(instance, c, i));
   const people = instance.people.map((person, index) => ({
     person,
@@ -122,6 +137,8 @@ export function buildContext(instance: TripInstance, options: TripOptions = {}):
     craftById: new Map(crafts.map((c) => [c.craft.id, c])),
     people,
     personById: new Map(people.map((p) => [p.person.id, p])),
+    potClasses: potClasses(instance.pots),
+    perPotMasses: hasPotMasses(instance.pots),
   };
 }
 
@@ -156,9 +173,15 @@ export function canSkipper(p: PersonInfo, c: CraftInfo): boolean {
   return owner === p.person.id || p.paddler;
 }
 
-/** Pots that fit on one run beside `peopleKg` of people. */
-export function potRoom(ctx: TripContext, c: CraftInfo, peopleKg: number): number {
-  const mass = ctx.instance.pots.massKg;
-  const byLoad = mass > 0 ? Math.floor((c.capKg - peopleKg) / mass + 1e-9) : Number.MAX_SAFE_INTEGER;
+/** The lightest pot class's mass (every pot's when they all weigh the same). */
+export const lightestPotKg = (ctx: TripContext) => ctx.potClasses[0]?.massKg ?? ctx.instance.pots.massKg;
+
+/**
+ * Pots of `massKg` (default: the lightest class) that fit on one run beside `peopleKg` of
+ * people. With several pot classes this is an upper bound: heavier pots fit fewer.
+ */
+export function potRoom(ctx: TripContext, c: CraftInfo, peopleKg: number, massKg = lightestPotKg(ctx)): number {
+  const byLoad = massKg > 0 ? Math.floor((c.capKg - peopleKg) / massKg + 1e-9) : Number.MAX_SAFE_INTEGER;
   return Math.max(0, Math.min(Math.max(0, Math.floor(c.craft.potSlots)), byLoad));
 }
+

@@ -1,10 +1,12 @@
 /**
  * A plan in the planner's own terms, before times and manifests are written out. Each used
  * craft has a crew: its skipper (aboard every run) and its passengers, who ride out on run 1
- * and come back with the craft at the close. `pots[c][k − 1]` is what run k of craft c carries;
- * the number of entries is the number of runs.
+ * and come back with the craft at the close. `pots[c][k − 1]` is how many pots run k of craft c
+ * carries (the number of entries is the number of runs) and `mix[c][k − 1]` how many of each
+ * pot class (`pot-classes.ts`); the two always agree.
  */
 import { potRoom, runTiming, SHARE_STEPS, type TripContext } from './context.js';
+import { mixKg } from './pot-classes.js';
 import type { PotDrop } from './planting.js';
 import type { TripRun } from './types.js';
 
@@ -18,6 +20,8 @@ export interface Draft {
   crews: (Crew | null)[];
   /** By craft index: pots per run. */
   pots: number[][];
+  /** By craft index and run: pots per class, lightest class first. */
+  mix: number[][][];
 }
 
 /** The lexicographic objective, best first: pots, people, last landing, runs, peak load share. */
@@ -29,7 +33,13 @@ export interface DraftScore {
   maxShare: number;
 }
 
-export const emptyDraft = (ctx: TripContext): Draft => ({ crews: ctx.crafts.map(() => null), pots: ctx.crafts.map(() => []) });
+export const emptyDraft = (ctx: TripContext): Draft => ({ crews: ctx.crafts.map(() => null), pots: ctx.crafts.map(() => []), mix: ctx.crafts.map(() => []) });
+
+/** No pots of any class. */
+export const noPots = (ctx: TripContext) => ctx.potClasses.map(() => 0);
+
+/** Kilograms of pots on run k (1-based) of craft c, at their classes' masses. */
+export const runPotKg = (ctx: TripContext, draft: Draft, c: number, k: number) => mixKg(ctx.potClasses, draft.mix[c]?.[k - 1]);
 
 /** Kilograms of people aboard run k (1-based) of craft c. */
 export function crewKg(ctx: TripContext, crew: Crew, k: number): number {
@@ -38,7 +48,7 @@ export function crewKg(ctx: TripContext, crew: Crew, k: number): number {
   return crew.passengers.reduce((kg, p) => kg + (ctx.people[p]?.weightKg ?? 0), skipper);
 }
 
-/** Pots run k of craft c could carry beside its crew. */
+/** Pots run k of craft c could carry beside its crew (of the lightest class: an upper bound). */
 export function runRoom(ctx: TripContext, draft: Draft, c: number, k: number): number {
   const crew = draft.crews[c];
   const info = ctx.crafts[c];
@@ -79,7 +89,7 @@ export function draftRuns(ctx: TripContext, draft: Draft): TripRun[] {
       const t = runTiming(ctx, info, k, k === count);
       const ids = (k === 1 ? [crew.skipper, ...crew.passengers] : [crew.skipper]).map((p) => ctx.people[p]?.person.id ?? '');
       const pots = draft.pots[c]?.[k - 1] ?? 0;
-      const loadKg = crewKg(ctx, crew, k) + pots * ctx.instance.pots.massKg;
+      const loadKg = crewKg(ctx, crew, k) + runPotKg(ctx, draft, c, k);
       const loadShare = info.craft.maxLoadKg > 0 ? loadKg / info.craft.maxLoadKg : 1;
       runs.push({ c, run: { craftId: info.craft.id, run: k, departAt: t.departAt, landAt: t.landAt, returnAt: t.returnAt, people: ids, pots, loadKg, loadShare } });
     }

@@ -4,7 +4,7 @@
  * fall back to the order of the instance's lists.
  */
 import { canSkipper, potRoom, runTiming, type CraftInfo, type PersonInfo, type TripContext } from './context.js';
-import { crewKg, emptyDraft, type Draft } from './draft.js';
+import { crewKg, emptyDraft, noPots, type Draft } from './draft.js';
 
 function minorsOf(ctx: TripContext): Map<string, PersonInfo[]> {
   const out = new Map<string, PersonInfo[]>();
@@ -73,6 +73,7 @@ export function assignCrews(ctx: TripContext, order: CraftOrder = 'owned-first')
     taken.add(skipper.index);
     draft.crews[c.index] = { skipper: skipper.index, passengers: [] };
     draft.pots[c.index] = [0];
+    draft.mix[c.index] = [noPots(ctx)];
     const kids = minors.get(skipper.person.id) ?? [];
     if (placeGroup(ctx, draft, kids, c.index)) kids.forEach((k) => taken.add(k.index));
   }

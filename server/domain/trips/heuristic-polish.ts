@@ -4,13 +4,14 @@
  * most loaded runs (balance).
  */
 import type { TripContext } from './context.js';
-import { compareScores, crewKg, draftArrivals, draftDrops, draftRuns, draftScore, runRoom, type Draft } from './draft.js';
+import { compareScores, crewKg, draftArrivals, draftDrops, draftRuns, draftScore, runPotKg, type Draft } from './draft.js';
 import { plantingShortfalls } from './planting.js';
 import type { TripRun } from './types.js';
 
 const copy = (d: Draft): Draft => ({
   crews: d.crews.map((crew) => (crew ? { skipper: crew.skipper, passengers: [...crew.passengers] } : null)),
   pots: d.pots.map((row) => [...row]),
+  mix: d.mix.map((row) => row.map((m) => [...m])),
 });
 
 const plantable = (ctx: TripContext, d: Draft) => plantingShortfalls(ctx, draftArrivals(ctx, d), draftDrops(ctx, d)).length === 0;
@@ -22,12 +23,13 @@ function rehome(ctx: TripContext, d: Draft, idle: number): Draft | null {
   if (!crew) return null;
   next.crews[idle] = null;
   next.pots[idle] = [];
+  next.mix[idle] = [];
   for (const p of [crew.skipper, ...crew.passengers]) {
     const kgP = ctx.people[p]?.weightKg ?? 0;
     const home = next.crews.findIndex((other, c) => {
       const info = ctx.crafts[c];
       if (!other || !info || other.passengers.length + 2 > info.craft.seats) return false;
-      return crewKg(ctx, other, 1) + kgP + (next.pots[c]?.[0] ?? 0) * ctx.instance.pots.massKg <= info.capKg + 1e-9;
+      return crewKg(ctx, other, 1) + kgP + runPotKg(ctx, next, c, 1) <= info.capKg + 1e-9;
     });
     const target = next.crews[home];
     if (!target) return null;
@@ -49,15 +51,26 @@ export function dropIdleCraft(ctx: TripContext, draft: Draft): Draft {
 
 const spread = (ctx: TripContext, d: Draft) => draftRuns(ctx, d).reduce((s, r) => s + r.loadShare * r.loadShare, 0);
 
-/** The draft with one pot moved from one run to another. */
+/** The draft with one pot moved from one run to another: the heaviest class that fits there. */
 function movePot(ctx: TripContext, draft: Draft, from: TripRun, to: TripRun): Draft | null {
   const src = ctx.craftById.get(from.craftId)?.index;
   const dst = ctx.craftById.get(to.craftId)?.index;
-  if (src === undefined || dst === undefined || to.pots >= runRoom(ctx, draft, dst, to.run)) return null;
+  const info = dst === undefined ? undefined : ctx.crafts[dst];
+  const crew = dst === undefined ? undefined : draft.crews[dst];
+  if (src === undefined || dst === undefined || !info || !crew || to.pots >= info.craft.potSlots) return null;
+  const spare = info.capKg - crewKg(ctx, crew, to.run) - runPotKg(ctx, draft, dst, to.run);
+  const fromMix = draft.mix[src]?.[from.run - 1] ?? [];
+  let j = ctx.potClasses.length - 1;
+  while (j >= 0 && !((fromMix[j] ?? 0) > 0 && (ctx.potClasses[j]?.massKg ?? Infinity) <= spare + 1e-9)) j--;
+  if (j < 0) return null;
   const next = copy(draft);
+  const out = next.mix[src]?.[from.run - 1];
+  const into = next.mix[dst]?.[to.run - 1];
   const fromRow = next.pots[src];
   const toRow = next.pots[dst];
-  if (!fromRow || !toRow) return null;
+  if (!out || !into || !fromRow || !toRow) return null;
+  out[j] = (out[j] ?? 0) - 1;
+  into[j] = (into[j] ?? 0) + 1;
   fromRow[from.run - 1] = (fromRow[from.run - 1] ?? 0) - 1;
   toRow[to.run - 1] = (toRow[to.run - 1] ?? 0) + 1;
   return next;

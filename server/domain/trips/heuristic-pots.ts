@@ -6,58 +6,10 @@
  * until that settles; then runs are dropped while pots and the last landing hold.
  */
 import { runTiming, type TripContext } from './context.js';
-import { compareScores, draftArrivals, draftScore, runRoom, type Draft } from './draft.js';
-import { plantingSlots } from './planting.js';
+import { compareScores, draftScore, runRoom, type Draft } from './draft.js';
+import { fillPots } from './heuristic-fill.js';
 
-interface Slot {
-  c: number;
-  k: number;
-  readyAt: number;
-  room: number;
-}
-
-function slotsOf(ctx: TripContext, draft: Draft, runs: readonly number[]): Slot[] {
-  const out: Slot[] = [];
-  draft.crews.forEach((crew, c) => {
-    const info = ctx.crafts[c];
-    if (!crew || !info) return;
-    for (let k = 1; k <= (runs[c] ?? 0); k++) out.push({ c, k, readyAt: runTiming(ctx, info, k, false).readyAt, room: runRoom(ctx, draft, c, k) });
-  });
-  return out.sort((a, b) => a.readyAt - b.readyAt || a.c - b.c || a.k - b.k);
-}
-
-/** Fills pots earliest first, with each craft allowed `runs[c]` runs (its skipper arriving after the last). */
-export function fillPots(ctx: TripContext, draft: Draft, runs: readonly number[]): Draft {
-  const shaped: Draft = { crews: draft.crews, pots: draft.crews.map((crew, c) => (crew ? new Array<number>(Math.max(1, runs[c] ?? 1)).fill(0) : [])) };
-  const arrivals = draftArrivals(ctx, shaped);
-  const slots = slotsOf(ctx, draft, runs);
-  const times = [...new Set(slots.map((s) => s.readyAt))];
-  const cap = times.map((t) => plantingSlots(ctx, arrivals, t));
-  const queued = times.map(() => 0);
-  let left = Math.max(0, Math.floor(ctx.instance.pots.count));
-  for (const s of slots) {
-    let add = Math.min(s.room, left);
-    times.forEach((t, i) => {
-      if (t <= s.readyAt) add = Math.min(add, (cap[i] ?? 0) - (queued[i] ?? 0));
-    });
-    if (add <= 0) continue;
-    times.forEach((t, i) => {
-      if (t <= s.readyAt) queued[i] = (queued[i] ?? 0) + add;
-    });
-    const row = shaped.pots[s.c];
-    if (row) row[s.k - 1] = add;
-    left -= add;
-  }
-  shaped.pots = shaped.pots.map((row, c) => (shaped.crews[c] ? trimRuns(row) : []));
-  return shaped;
-}
-
-/** Drops trailing empty runs; run 1 stays (it carries the crew). */
-const trimRuns = (row: readonly number[]) => {
-  let n = row.length;
-  while (n > 1 && (row[n - 1] ?? 0) === 0) n--;
-  return row.slice(0, Math.max(1, n));
-};
+export { fillPots };
 
 /** Fill, then cut each craft to the runs it used and fill again, until nothing changes. */
 function shrink(ctx: TripContext, draft: Draft, start: readonly number[]): Draft {

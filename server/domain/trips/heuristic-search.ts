@@ -6,7 +6,7 @@
  * kilograms are gathered in fewer crafts (the square of each craft's spare), which is what lets
  * a later move complete one more pot. Moves never change who goes out. Deterministic, bounded.
  */
-import { canSkipper, potRoom, type TripContext } from './context.js';
+import { canSkipper, lightestPotKg, potRoom, type TripContext } from './context.js';
 import { crewKg, type Crew, type Draft } from './draft.js';
 
 type Crews = (Crew | null)[];
@@ -24,7 +24,7 @@ function craftValue(ctx: TripContext, crews: Crews, c: number): Value | null {
   const kg = crewKg(ctx, crew, 1);
   if (!skipper || !canSkipper(skipper, info) || crew.passengers.length + 1 > info.craft.seats || kg > info.capKg + 1e-9) return null;
   const room = potRoom(ctx, info, kg);
-  const mass = ctx.instance.pots.massKg;
+  const mass = lightestPotKg(ctx);
   const spare = room < info.craft.potSlots && mass > 0 ? info.capKg - kg - room * mass : 0;
   return { room, spread: spare * spare };
 }
@@ -118,5 +118,5 @@ export function packCrews(ctx: TripContext, draft: Draft, passes = 50): Draft {
     }
     if (!improved) break;
   }
-  return { crews, pots: draft.pots };
+  return { crews, pots: draft.pots, mix: draft.mix };
 }

@@ -10,7 +10,8 @@ export interface MilpIndex {
   s: Map<string, number>;
   x: Map<string, number>;
   u: Map<number, number[]>;
-  n: Map<number, number[]>;
+  /** Pots per run and pot class: `n.get(c)[k][j]`. */
+  n: Map<number, number[][]>;
   /** Distinct unloading times, ascending, with their A, π and G columns. */
   times: number[];
   A: number[];

@@ -1,7 +1,8 @@
 /**
  * The trip plan as a MILP, run-indexed. Per modelled craft c and run k (timing fixed: runs are
- * back to back, see `context.ts`): `u[c][k]` run used (binary, runs consecutive), `n[c][k]` pots
- * (integer ≤ pot slots and load); per person class q (`milp-classes.ts`): `s[q,c]` skipper of c
+ * back to back, see `context.ts`): `u[c][k]` run used (binary, runs consecutive), `n[c][k][j]`
+ * pots of mass class j (integer; all classes together ≤ pot slots and the load margin, each pot
+ * at its class's rounded-up mass, see `pot-classes.ts`); per person class q (`milp-classes.ts`): `s[q,c]` skipper of c
  * (binary), `x[q,c]` passengers on run 1 of c (integer). Each class sends out at most its size;
  * a used craft has exactly one skipper; seats and margins hold on run 1 (the whole roster, so
  * also the ride back) and on later runs (skipper and pots); a minor rides only where their
@@ -41,9 +42,10 @@ function addColumns(ctx: TripContext, lp: LpBuilder, ix: MilpIndex, horizon: num
     ix.room.set(c, room);
     let runs = 1;
     while (runs < info.maxRuns && runTiming(ctx, info, runs + 1, false).landAt <= horizon) runs++;
-    const firstRoom = runTiming(ctx, info, 1, false).landAt <= horizon ? room : 0;
+    const inTime = runTiming(ctx, info, 1, false).landAt <= horizon;
+    const classRoom = ctx.potClasses.map((cl) => Math.min(cl.count, potRoom(ctx, info, lightest, cl.massKg)));
     ix.u.set(c, Array.from({ length: runs }, () => lp.col(0, 1, true)));
-    ix.n.set(c, Array.from({ length: runs }, (_, k) => lp.col(0, k === 0 ? firstRoom : room, true)));
+    ix.n.set(c, Array.from({ length: runs }, (_, k) => classRoom.map((r) => lp.col(0, k === 0 && !inTime ? 0 : r, true))));
   }
   addMinorColumns(ctx, lp, ix);
 }
@@ -78,7 +80,7 @@ function peopleRows(ctx: TripContext, lp: LpBuilder, ix: MilpIndex): void {
 }
 
 function craftRows(ctx: TripContext, lp: LpBuilder, ix: MilpIndex): void {
-  const mass = ctx.instance.pots.massKg;
+  const mass = ctx.potClasses.map((cl) => cl.massKg);
   for (const c of ix.crafts) {
     const info = ctx.crafts[c];
     const u = ix.u.get(c) ?? [];
@@ -94,24 +96,33 @@ function craftRows(ctx: TripContext, lp: LpBuilder, ix: MilpIndex): void {
       if (before !== undefined) lp.row(-Infinity, 0, [[uk, 1], [before, -1]]);
       const nk = n[k];
       if (nk === undefined) return;
-      lp.row(-Infinity, 0, [[nk, 1], [uk, -room]]);
-      lp.row(-Infinity, info.capKg, [...crewTerms(ix, c, k === 0), [nk, mass]]);
+      lp.row(-Infinity, 0, [...termsOf(nk, 1), [uk, -room]]);
+      lp.row(-Infinity, info.capKg, [...crewTerms(ix, c, k === 0), ...nk.map((col, j) => [col, mass[j] ?? 0] as const)]);
     });
   }
-  lp.row(-Infinity, Math.max(0, Math.floor(ctx.instance.pots.count)), termsOf(ix.crafts.flatMap((c) => ix.n.get(c) ?? []), 1));
+  ctx.potClasses.forEach((cl, j) => lp.row(-Infinity, cl.count, termsOf(ix.crafts.flatMap((c) => (ix.n.get(c) ?? []).map((nk) => nk[j])), 1)));
 }
 
-/** Identical crafts (same figures, no owner) are interchangeable: order them by runs made. */
-function symmetryRows(ctx: TripContext, lp: LpBuilder, ix: MilpIndex): void {
-  const prev = new Map<string, number>();
+/** Modelled crafts with the same figures and no owner, in model order: interchangeable. */
+export function symmetryGroups(ctx: TripContext, ix: MilpIndex): number[][] {
+  const groups = new Map<string, number[]>();
   for (const c of ix.crafts) {
-    const k = ctx.crafts[c]?.craft;
+    const info = ctx.crafts[c];
+    const k = info?.craft;
     if (!k || k.ownerId) continue;
-    const sig = [k.kind, k.seats, k.maxLoadKg, k.potSlots, k.speedKmh, k.needsOperator].join('|');
-    const before = prev.get(sig);
-    prev.set(sig, c);
-    if (before === undefined) continue;
-    lp.row(0, Infinity, [...termsOf(ix.u.get(before) ?? [], 1), ...termsOf(ix.u.get(c) ?? [], -1)]);
+    const sig = [k.kind, k.seats, k.maxLoadKg, k.potSlots, k.speedKmh, k.needsOperator, info.plated].join('|');
+    groups.set(sig, [...(groups.get(sig) ?? []), c]);
+  }
+  return [...groups.values()].filter((g) => g.length > 1);
+}
+
+/** Identical crafts are ordered by runs made (the warm start is put in the same order). */
+function symmetryRows(ctx: TripContext, lp: LpBuilder, ix: MilpIndex): void {
+  for (const group of symmetryGroups(ctx, ix)) {
+    group.slice(1).forEach((c, i) => {
+      const before = group[i] ?? -1;
+      lp.row(0, Infinity, [...termsOf(ix.u.get(before) ?? [], 1), ...termsOf(ix.u.get(c) ?? [], -1)]);
+    });
   }
 }
 

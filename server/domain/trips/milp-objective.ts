@@ -12,7 +12,7 @@
  */
 import { runTiming, SHARE_STEPS, type TripContext } from './context.js';
 import type { LpBuilder, Term } from './milp-lp.js';
-import { crewTerms, key, type MilpIndex } from './milp-index.js';
+import { crewTerms, key, termsOf, type MilpIndex } from './milp-index.js';
 
 /** Weights for U modelled runs, T distinct landing times and P people. */
 export function tierWeights(U: number, T: number, P: number): MilpIndex['weights'] {
@@ -40,7 +40,7 @@ function addLastLanding(ctx: TripContext, lp: LpBuilder, ix: MilpIndex): number 
     (ix.u.get(c) ?? []).forEach((uk, k) => {
       const z = ix.z[ix.landRank.get(landAt(ctx, c, k + 1)) ?? 0] ?? -1;
       if (z < 0) return;
-      lp.row(-Infinity, 0, [[ix.n.get(c)?.[k] ?? -1, 1], [z, -room]]);
+      lp.row(-Infinity, 0, [...termsOf(ix.n.get(c)?.[k] ?? [], 1), [z, -room]]);
       if (k > 0) lp.row(-Infinity, 0, [[uk, 1], [z, -1]]);
     });
   }
@@ -54,7 +54,7 @@ function addLastLanding(ctx: TripContext, lp: LpBuilder, ix: MilpIndex): number 
  */
 function addPeakShare(ctx: TripContext, lp: LpBuilder, ix: MilpIndex): number {
   ix.M = lp.col(0, SHARE_STEPS, true);
-  const mass = ctx.instance.pots.massKg;
+  const mass = ctx.potClasses.map((cl) => cl.massKg);
   let U = 0;
   for (const c of ix.crafts) {
     const info = ctx.crafts[c];
@@ -64,7 +64,8 @@ function addPeakShare(ctx: TripContext, lp: LpBuilder, ix: MilpIndex): number {
     const pct = SHARE_STEPS / info.craft.maxLoadKg;
     const heaviest = Math.max(0, ...ix.classes.map((cl, q) => (ix.s.has(key(q, c)) ? cl.rep.weightKg * pct : 0)));
     u.forEach((uk, k) => {
-      const share: Term[] = [...crewTerms(ix, c, k === 0, -pct), [ix.n.get(c)?.[k] ?? -1, -mass * pct]];
+      const pots = (ix.n.get(c)?.[k] ?? []).map((col, j) => [col, -(mass[j] ?? 0) * pct] as const);
+      const share: Term[] = [...crewTerms(ix, c, k === 0, -pct), ...pots];
       if (k === 0) lp.row(0, Infinity, [[ix.M, 1], ...share]);
       else lp.row(-heaviest, Infinity, [[ix.M, 1], ...share, [uk, -heaviest]]);
     });
@@ -83,7 +84,7 @@ export function addObjective(ctx: TripContext, lp: LpBuilder, ix: MilpIndex): vo
 function setCosts(lp: LpBuilder, ix: MilpIndex): void {
   const w = ix.weights;
   for (const c of ix.crafts) {
-    for (const v of ix.n.get(c) ?? []) lp.cost(v, -w.pots);
+    for (const v of (ix.n.get(c) ?? []).flat()) lp.cost(v, -w.pots);
     for (const v of ix.u.get(c) ?? []) lp.cost(v, w.runs);
     ix.classes.forEach((_, q) => {
       for (const v of [ix.s.get(key(q, c)), ix.x.get(key(q, c))]) if (v !== undefined) lp.cost(v, -w.people);

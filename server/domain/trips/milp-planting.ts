@@ -19,8 +19,7 @@ function eventsByTime(ctx: TripContext, ix: MilpIndex): Map<number, { arrive: Te
       e.arrive.push([uk, 1]);
       const after = u[k + 1];
       if (after !== undefined) e.arrive.push([after, -1]);
-      const pots = n[k];
-      if (pots !== undefined) e.drop.push(pots);
+      e.drop.push(...(n[k] ?? []));
       if (k > 0) return;
       ix.classes.forEach((_, q) => {
         const x = ix.x.get(key(q, c));

@@ -2,6 +2,23 @@
 import { runTiming, type TripContext } from './context.js';
 import { draftRuns, emptyDraft, shareSteps, type Draft } from './draft.js';
 import { key, type MilpIndex } from './milp-index.js';
+import { symmetryGroups } from './milp-model.js';
+
+/** The draft with identical crafts swapped so that they make runs in non-increasing numbers, as the model orders them. */
+function canonical(ctx: TripContext, ix: MilpIndex, draft: Draft): Draft {
+  const out: Draft = { crews: [...draft.crews], pots: [...draft.pots], mix: [...draft.mix] };
+  for (const group of symmetryGroups(ctx, ix)) {
+    const runs = (c: number) => (draft.crews[c] ? (draft.pots[c]?.length ?? 0) : 0);
+    const order = [...group].sort((a, b) => runs(b) - runs(a) || a - b);
+    group.forEach((c, i) => {
+      const from = order[i] ?? c;
+      out.crews[c] = draft.crews[from] ?? null;
+      out.pots[c] = draft.pots[from] ?? [];
+      out.mix[c] = draft.mix[from] ?? [];
+    });
+  }
+  return out;
+}
 
 function setAll(v: number[], ix: MilpIndex, ctx: TripContext, draft: Draft): boolean {
   let ok = true;
@@ -15,9 +32,10 @@ function setAll(v: number[], ix: MilpIndex, ctx: TripContext, draft: Draft): boo
     const pots = draft.pots[c] ?? [];
     const u = ix.u.get(c);
     if (!u || pots.length > u.length) ok = false;
-    pots.forEach((n, k) => {
+    pots.forEach((_, k) => {
       set(u?.[k], 1);
-      set(ix.n.get(c)?.[k], n);
+      const cols = ix.n.get(c)?.[k];
+      (draft.mix[c]?.[k] ?? []).forEach((n, j) => set(cols?.[j], n));
     });
   });
   return ok;
@@ -59,7 +77,8 @@ function setPlanting(v: number[], ix: MilpIndex, ctx: TripContext, draft: Draft)
 }
 
 /** The draft as a full column vector, or null when the model cannot express it. */
-export function startVector(ctx: TripContext, ix: MilpIndex, numCols: number, draft: Draft): number[] | null {
+export function startVector(ctx: TripContext, ix: MilpIndex, numCols: number, given: Draft): number[] | null {
+  const draft = canonical(ctx, ix, given);
   const v = new Array<number>(numCols).fill(0);
   if (!setAll(v, ix, ctx, draft)) return null;
   if (ctx.plantMs > 0) setPlanting(v, ix, ctx, draft);
@@ -84,7 +103,8 @@ export function decode(ctx: TripContext, ix: MilpIndex, value: ArrayLike<number>
     const q = ix.classes.findIndex((_, i) => get(ix.s.get(key(i, c))) === 1);
     draft.crews[c] = { skipper: take(q), passengers: [] };
     const runs = (ix.u.get(c) ?? []).filter((col) => get(col) === 1).length;
-    draft.pots[c] = (ix.n.get(c) ?? []).slice(0, Math.max(1, runs)).map((col) => get(col));
+    draft.mix[c] = (ix.n.get(c) ?? []).slice(0, Math.max(1, runs)).map((cols) => ctx.potClasses.map((_, j) => get(cols[j])));
+    draft.pots[c] = (draft.mix[c] ?? []).map((mix) => mix.reduce((n, x) => n + x, 0));
   }
   for (const c of ix.crafts) {
     const crew = draft.crews[c];

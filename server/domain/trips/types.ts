@@ -20,6 +20,11 @@ export interface TripCraft {
   needsOperator: boolean;
   /** A volunteer's own craft: only its owner paddles it. */
   ownerId?: string | null;
+  /**
+   * Whether `maxLoadKg` comes from a capacity plate (the plated margin applies) or from the
+   * maker (the paddlecraft margin). Left out, skiffs and operator-run craft count as plated.
+   */
+  plated?: boolean | null;
 }
 
 /** One person going out to the site. Skills: `paddler`, `operator` (alias `boat-operator`), … */
@@ -36,7 +41,7 @@ export interface TripPerson {
 export interface LoadMargin {
   /** Kayaks and canoes (maker's figure): default 0.7. */
   paddlecraft: number;
-  /** Skiffs and operator-run powerboats (capacity plate): default 1.0. */
+  /** Craft rated by a capacity plate (by default skiffs and operator-run craft): default 1.0. */
   plated: number;
 }
 
@@ -47,14 +52,27 @@ export interface TripInstance {
   /** Minutes one pair of planters needs per tree; 0 or less means planting is not limited. */
   plantingMinutesPerTree: number;
   loadMargin?: LoadMargin;
+  /** Weight counted for a person who gave none; default `DEFAULT_STANDARD_PERSON_KG`. */
+  standardPersonKg?: number;
   craft: readonly TripCraft[];
   people: readonly TripPerson[];
-  pots: { count: number; massKg: number };
+  pots: TripPots;
+}
+
+/**
+ * The pots to take out. `masses` lists the recorded mass of individual pots (at most `count`
+ * of them); every other pot weighs `massKg`. Without `masses` all `count` pots weigh `massKg`.
+ * @example { count: 4, massKg: 27, masses: [31.5, 24] } // 31.5, 24, 27 and 27 kg
+ */
+export interface TripPots {
+  count: number;
+  massKg: number;
+  masses?: readonly number[];
 }
 
 /** Tuning that is not part of the instance. */
 export interface TripOptions {
-  /** Weight counted for a person who gave none; default `DEFAULT_STANDARD_PERSON_KG`. */
+  /** Weight counted for a person who gave none when the instance sets none; default `DEFAULT_STANDARD_PERSON_KG`. */
   standardPersonKg?: number;
   /** HiGHS wall-clock limit in seconds; default 1.5. */
   timeLimitSeconds?: number;
@@ -70,6 +88,9 @@ export interface TripRun {
   returnAt: number;
   people: string[];
   pots: number;
+  /** The mass of each pot aboard, when the instance gives per-pot masses. */
+  potMassesKg?: number[];
+  /** People plus pots, kg, with each pot at its own mass. */
   loadKg: number;
   /** Load as a share of the rated maximum (`maxLoadKg`), not of the margin. */
   loadShare: number;

@@ -9,16 +9,19 @@
  * craft need the operator skill; an owned craft its owner); each person rides out once (or, as
  * a shuttling crew member, on every run from their first to the craft's last) and comes back
  * with that craft at the close, so a craft's whole roster must fit its seats and margin on the
- * way back; a minor is on every run their guardian is not missing from; the pots fit the count;
- * and the crew at the site can plant every pot before the close.
+ * way back; a minor is on every run their guardian is not missing from; the pots fit the count
+ * (and a run that lists its pots' masses lists ready pots, see `validate-pots.ts`, which also
+ * decides each run's pots for the load check); and the crew at the site can plant every pot
+ * before the close.
  */
 import { buildContext, type TripContext } from './context.js';
 import { checkPeople } from './validate-people.js';
 import { checkCraftRuns } from './validate-craft.js';
+import { resolvePotMasses } from './validate-pots.js';
 import { clock, kg } from './format.js';
 import type { TripInstance, TripOptions, TripRun, TripViolation } from './types.js';
 
-function checkRun(ctx: TripContext, r: TripRun, out: TripViolation[]): void {
+function checkRun(ctx: TripContext, r: TripRun, potKg: number, out: TripViolation[]): void {
   const info = ctx.craftById.get(r.craftId);
   const at = { craftId: r.craftId, run: r.run };
   if (!info) {
@@ -39,7 +42,7 @@ function checkRun(ctx: TripContext, r: TripRun, out: TripViolation[]): void {
   if (!Number.isInteger(r.pots) || r.pots < 0 || r.pots > info.craft.potSlots) {
     out.push({ rule: 'pot-slots', ...at, message: `${name} carries ${r.pots} pots but has ${info.craft.potSlots} pot slots` });
   }
-  const load = peopleKg + Math.max(0, r.pots) * ctx.instance.pots.massKg;
+  const load = peopleKg + potKg;
   if (load > info.capKg + 1e-6) {
     const pct = Math.round((info.capKg / info.craft.maxLoadKg) * 100);
     out.push({ rule: 'load', ...at, message: `${name} loads ${kg(load)}, over ${pct} % of its rated ${kg(info.craft.maxLoadKg)} (${kg(info.capKg)})` });
@@ -56,8 +59,10 @@ function checkRun(ctx: TripContext, r: TripRun, out: TripViolation[]): void {
  */
 export function validateTripPlan(instance: TripInstance, plan: { runs: readonly TripRun[] }, options: TripOptions = {}): TripViolation[] {
   const ctx = buildContext(instance, options);
+  const pots = resolvePotMasses(ctx, plan.runs);
   const out: TripViolation[] = [];
-  for (const r of plan.runs) checkRun(ctx, r, out);
+  plan.runs.forEach((r, i) => checkRun(ctx, r, (pots.masses[i] ?? []).reduce((w, m) => w + m, 0), out));
+  out.push(...pots.violations);
   const byCraft = new Map<string, TripRun[]>();
   for (const r of plan.runs) if (ctx.craftById.has(r.craftId)) byCraft.set(r.craftId, [...(byCraft.get(r.craftId) ?? []), r]);
   for (const [id, runs] of byCraft) checkCraftRuns(ctx, id, runs, out);
@@ -67,4 +72,12 @@ export function validateTripPlan(instance: TripInstance, plan: { runs: readonly 
     out.push({ rule: 'pots-total', message: `the runs carry ${total} pots but only ${instance.pots.count} are ready` });
   }
   return out;
+}
+
+/**
+ * The mass of each pot aboard each run, as `validateTripPlan` counts them (see `validate-pots.ts`).
+ * @example potsAboard(instance, runs) // [[31.5, 27], [27, 27, 24]]
+ */
+export function potsAboard(instance: TripInstance, runs: readonly TripRun[], options: TripOptions = {}): number[][] {
+  return resolvePotMasses(buildContext(instance, options), runs).masses;
 }

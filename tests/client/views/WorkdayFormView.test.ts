@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import type { DayCapacity } from '@shared/schemas/trip-capacity.schema';
 import { screen, waitFor, within } from '@testing-library/vue';
 import userEvent from '@testing-library/user-event';
 import { http, HttpResponse } from 'msw';
@@ -18,6 +19,40 @@ function answerSites(): void {
   server.use(http.get('/api/sites', () => HttpResponse.json({ sites: [other, site] })));
 }
 
+/** Invented estimate figures for the day-capacity panel. */
+function buildCapacity(overrides: Partial<DayCapacity> = {}): DayCapacity {
+  return {
+    window: { start: '2025-07-10T13:30:00.000Z', end: '2025-07-10T16:00:00.000Z' },
+    trees: 12,
+    transportPots: 16,
+    plantingTrees: 12,
+    skippers: 3,
+    planters: 4,
+    roles: { 'own-kayak': 0, seat: 2, operator: 1, shore: 2, planter: 4 },
+    runs: 5,
+    lastLandingAt: '2025-07-10T14:45:00.000Z',
+    craftUsed: ['skiff', 'canoe-1', 'canoe-2'],
+    notes: ["Loads are planned to at most 70 % of a kayak's or canoe's rated load (common practice from paddling guidance) and 100 % of a capacity plate (the plate is the legal limit)."],
+    ...overrides,
+  };
+}
+
+/** Answers both day-capacity routes; records what was asked. */
+function answerCapacity(capacity = buildCapacity()): { posted: unknown[]; byWorkday: string[] } {
+  const seen = { posted: [] as unknown[], byWorkday: [] as string[] };
+  server.use(
+    http.post('/api/trip-plans/capacity', async ({ request }) => {
+      seen.posted.push(await request.json());
+      return HttpResponse.json({ capacity });
+    }),
+    http.get('/api/workdays/:id/capacity', ({ params }) => {
+      seen.byWorkday.push(String(params.id));
+      return HttpResponse.json({ capacity });
+    }),
+  );
+  return seen;
+}
+
 function answerCreate(): { bodies: unknown[] } {
   const seen = { bodies: [] as unknown[] };
   const created = buildWorkdayDto({ siteId: site.id, title: 'Spring planting', status: 'published' });
@@ -33,6 +68,7 @@ function answerCreate(): { bodies: unknown[] } {
 
 async function openNew(query = '') {
   answerSites();
+  answerCapacity();
   const result = await renderApp(`/workdays/new${query}`, coordinator);
   const main = within(screen.getByRole('main'));
   await main.findByRole('button', { name: 'Save as draft' });
@@ -84,7 +120,8 @@ describe('WorkdayFormView', () => {
       minimumAge: 12,
       status: 'published',
     });
-    await waitFor(() => expect(router.currentRoute.value.name).toBe('workday-manage'));
+    // The first visit loads the workday page's code, which can take a while on a busy machine.
+    await waitFor(() => expect(router.currentRoute.value.name).toBe('workday-manage'), { timeout: 8_000 });
   });
 
   it('saves a draft, converting a winter day typed on the site clock (PST) to UTC', async () => {
@@ -152,6 +189,7 @@ describe('WorkdayFormView', () => {
         return HttpResponse.json({ workday: { ...workday, startsAt: '2025-03-04T12:00:00.000Z' } });
       }),
     );
+    answerCapacity();
     const user = userEvent.setup();
     await renderApp(`/workdays/${workday.id}/edit`, coordinator);
     const main = within(screen.getByRole('main'));
@@ -166,5 +204,63 @@ describe('WorkdayFormView', () => {
     await user.click(main.getByRole('button', { name: 'Save changes' }));
 
     await waitFor(() => expect(patched).toEqual({ startsAt: '2025-03-04T12:00:00.000Z', endsAt: '2025-03-04T14:10:00.000Z' }));
+  });
+});
+
+describe('WorkdayFormView: what the day can plant', () => {
+  it('estimates the chosen site and times, and copies the needs into the role caps', async () => {
+    const seen = answerCreate();
+    const user = userEvent.setup();
+    const { main } = await openNew(`?siteId=${site.id}&startsAt=2025-07-10T13:30:00.000Z&endsAt=2025-07-10T16:00:00.000Z`);
+    const estimate = answerCapacity();
+
+    await user.clear(main.getByLabelText('Ends'));
+    await user.type(main.getByLabelText('Ends'), '09:30');
+    expect(await main.findByText('This day can plant about 12 trees and needs 1 boat operator, 2 paddlers needing a seat, 4 planters and 2 on the shore crew.')).toBeTruthy();
+    // 14:45 UTC is 07:45 on the site's clock (PDT, UTC−7).
+    expect(main.getByText('The last pot lands at about 07:45, in 5 runs across 3 craft.')).toBeTruthy();
+    expect(main.getByText(/common practice from paddling guidance/)).toBeTruthy();
+    expect(estimate.posted.at(-1)).toEqual({ window: { start: '2025-07-10T13:30:00.000Z', end: '2025-07-10T16:30:00.000Z' }, siteId: site.id });
+
+    await user.click(main.getByRole('button', { name: 'Use these numbers as the role caps' }));
+    expect((main.getByRole('checkbox', { name: 'Cap each role' }) as HTMLInputElement).checked).toBe(true);
+    expect(input(main, 'Boat operator').value).toBe('1');
+    expect(input(main, 'Paddler needing a seat').value).toBe('2');
+    expect(input(main, 'Planter').value).toBe('4');
+    expect(input(main, 'Shore crew').value).toBe('2');
+    expect(input(main, 'Paddler with own kayak').value).toBe('');
+    expect(input(main, 'Total crew cap').value).toBe('9');
+    expect(main.getByText(/Role caps and the total cap now follow the estimate/)).toBeTruthy();
+
+    await user.click(main.getByRole('button', { name: 'Save as draft' }));
+    await waitFor(() => expect(seen.bodies).toHaveLength(1));
+    expect(seen.bodies[0]).toMatchObject({
+      capacity: 9,
+      roles: [
+        { role: 'seat', capacity: 2 },
+        { role: 'operator', capacity: 1 },
+        { role: 'shore', capacity: 2 },
+        { role: 'planter', capacity: 4 },
+      ],
+    });
+  });
+
+  it('asks by workday id while a saved workday keeps its site and times, and shows nothing for a nursery day', async () => {
+    const workday = buildWorkdayDto({ siteId: other.id, site: { ...buildWorkdayDto().site, id: other.id }, status: 'draft' });
+    mockWorkdayAndRoster(workday);
+    server.use(http.get('/api/sites', () => HttpResponse.json({ sites: [other, site] })));
+    const seen = answerCapacity(buildCapacity({ trees: 0, roles: { 'own-kayak': 0, seat: 0, operator: 0, shore: 2, planter: 0 }, lastLandingAt: null }));
+    const user = userEvent.setup();
+    await renderApp(`/workdays/${workday.id}/edit`, coordinator);
+    const main = within(screen.getByRole('main'));
+
+    expect(await main.findByText('This day cannot plant any trees with the active fleet in this window.')).toBeTruthy();
+    expect(seen.byWorkday).toEqual([workday.id]);
+    expect(seen.posted).toEqual([]);
+    expect(main.queryByRole('button', { name: 'Use these numbers as the role caps' })).toBeNull();
+
+    await user.click(main.getByRole('combobox', { name: 'Kind of workday' }));
+    await user.click(await screen.findByRole('option', { name: 'Nursery' }));
+    await waitFor(() => expect(main.queryByText('What this day can do')).toBeNull());
   });
 });

@@ -51,6 +51,8 @@ describe('dayCapacity', () => {
       plantingTrees: 4,
       roles: { 'own-kayak': 0, seat: 1, operator: 0, shore: 2, planter: 1 },
       craftUsed: ['canoe-1'],
+      runs: 1,
+      lastLandingAt: at('13:15'),
     });
   });
 

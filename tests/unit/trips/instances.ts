@@ -88,3 +88,9 @@ export function largeInstance(): TripInstance {
     pots: { count: 600, massKg: 25 },
   };
 }
+
+/** The demo-size day with a recorded pot mass per tree: 120 invented masses from 22 to 33.9 kg in a fixed pattern. */
+export function demoInstanceWithPotMasses(): TripInstance {
+  const masses = Array.from({ length: 120 }, (_, i) => 22 + ((i * 37) % 120) / 10);
+  return { ...demoInstance(), pots: { count: 120, massKg: 25, masses } };
+}

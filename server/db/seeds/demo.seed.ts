@@ -8,6 +8,7 @@ import { DEMO_PASSWORD, demoPeople } from './demo-people.js';
 import { demoSites } from './demo-sites.js';
 import { seedDemoWorkdays } from './demo-workdays.js';
 import { seedDemoNursery } from './demo-nursery.js';
+import { seedDemoFleet } from './demo-fleet.js';
 import { seedDemoGiving } from './demo-giving.js';
 import { seedDemoOutcomes } from './demo-outcomes.js';
 
@@ -21,6 +22,8 @@ export async function seedDemo(deps: { db: DataSource; hasher: PasswordHasher; n
   const created = await seedDemoPeople(deps);
   const workdays = deps.stations ? await seedDemoWorkdays({ db: deps.db, stations: deps.stations, now: deps.now }) : 0;
   const trees = await seedDemoNursery({ db: deps.db, now: deps.now });
+  // After the nursery: the boat day reserves ready trees.
+  await seedDemoFleet({ db: deps.db, stations: deps.stations, now: deps.now });
   // After the nursery too: demo gifts sponsor nursery trees.
   await seedDemoGiving({ db: deps.db, now: deps.now });
   // Last: planted cohorts take fresh tags after the nursery's, and use the completed demo workday.

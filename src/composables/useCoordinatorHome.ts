@@ -1,7 +1,13 @@
 import { computed, ref, type ComputedRef, type Ref } from 'vue';
+import type { NurseryTasksDto } from '@shared/schemas/nursery.schema';
 import type { RosterRow } from '@shared/schemas/roster.schema';
 import type { WorkdayDto } from '@shared/schemas/workday.schema';
+import { listOpenCampaigns, type Campaign } from '@/api/campaigns';
+import { fetchMonitoringDue, type MonitoringDueDto } from '@/api/monitoring';
 import { fetchRoster } from '@/api/roster';
+import { listSites } from '@/api/sites';
+import { fetchNurseryTasks } from '@/api/tanks';
+import { fetchSiteReadiness } from '@/api/trees';
 import { listWorkdays } from '@/api/workdays';
 import { useOrganisationStore } from '@/stores/organisation';
 import { localDateKey, zonedTime } from '@/utils/zoned-time';
@@ -21,6 +27,38 @@ export interface CoordinatorHome {
   drafts: ComputedRef<WorkdayDto[]>;
   /** The next workday's most recent sign-ups, newest first; empty when its roster couldn't be read. */
   latestSignups: Ref<RosterRow[]>;
+  /** The rest of the dashboard; each part is null until loaded, or 'error' when it couldn't be. */
+  extras: HomeExtras;
+}
+
+/** Trees the server judges ready for each site (held at its salinity, tall enough), out of those it judged. */
+export interface SiteReadyCount {
+  siteId: string;
+  siteName: string;
+  ready: number;
+  judged: number;
+}
+
+export interface HomeExtras {
+  readyBySite: Ref<SiteReadyCount[] | null | 'error'>;
+  brining: Ref<NurseryTasksDto | null | 'error'>;
+  monitoringDue: Ref<MonitoringDueDto | null | 'error'>;
+  campaigns: Ref<Campaign[] | null | 'error'>;
+}
+
+/** Runs one part of the dashboard on its own, so a slow or failing part never holds up the others. */
+async function part<T>(target: Ref<T | null | 'error'>, load: () => Promise<T>): Promise<void> {
+  try {
+    target.value = await load();
+  } catch {
+    target.value = 'error';
+  }
+}
+
+async function readyBySite(): Promise<SiteReadyCount[]> {
+  const sites = await listSites();
+  const judged = await Promise.all(sites.map((s) => fetchSiteReadiness(s.id)));
+  return judged.map((r) => ({ siteId: r.site.id, siteName: r.site.name, ready: r.trees.filter((t) => t.ready).length, judged: r.trees.length }));
 }
 
 /** "At the water": workdays from today on, drafts included, and who joined the next one lately. */
@@ -29,6 +67,7 @@ export function useCoordinatorHome(now: () => Date = () => new Date()): Coordina
   const workdays = ref<WorkdayDto[]>([]);
   const latestSignups = ref<RosterRow[]>([]);
   const loaded = ref(false);
+  const extras: HomeExtras = { readyBySite: ref(null), brining: ref(null), monitoringDue: ref(null), campaigns: ref(null) };
 
   const live = computed(() => workdays.value.filter((w) => w.status === 'published' && Date.parse(w.endsAt) > now().getTime()));
   const next = computed(() => live.value[0] ?? null);
@@ -47,13 +86,25 @@ export function useCoordinatorHome(now: () => Date = () => new Date()): Coordina
     latestSignups.value = [...rows].sort((a, b) => b.waiverSignedAt.localeCompare(a.waiverSignedAt)).slice(0, SIGNUPS_SHOWN);
   }
 
-  async function reload(): Promise<void> {
-    const rows = await run();
-    if (!rows) return;
-    workdays.value = rows;
-    loaded.value = true;
-    await loadSignups(next.value);
+  function loadExtras(): Promise<unknown> {
+    return Promise.all([
+      part(extras.readyBySite, readyBySite),
+      part(extras.brining, () => fetchNurseryTasks()),
+      part(extras.monitoringDue, fetchMonitoringDue),
+      part(extras.campaigns, listOpenCampaigns),
+    ]);
   }
 
-  return { loading, error, loaded, reload, next, upcoming, drafts, latestSignups };
+  async function reload(): Promise<void> {
+    const pending = loadExtras();
+    const rows = await run();
+    if (rows) {
+      workdays.value = rows;
+      loaded.value = true;
+      await loadSignups(next.value);
+    }
+    await pending;
+  }
+
+  return { loading, error, loaded, reload, next, upcoming, drafts, latestSignups, extras };
 }

@@ -23,6 +23,11 @@ export const server = setupServer(
   http.get('/api/organisation', () => HttpResponse.json({ organisation: DEFAULT_ORGANISATION })),
   // The coordinator home lists workdays; tests about other pages that land there need an answer too.
   http.get('/api/workdays', () => HttpResponse.json({ workdays: [] })),
+  // ...and the rest of "At the water": sites (trees ready per site), brining today, monitoring due, campaigns.
+  http.get('/api/sites', () => HttpResponse.json({ sites: [] })),
+  http.get('/api/nursery/tasks', () => HttpResponse.json({ date: '2025-01-01', tasks: [], skipped: [] })),
+  http.get('/api/monitoring/due', () => HttpResponse.json({ today: '2025-01-01', toleranceDays: 14, sites: [] })),
+  http.get('/api/campaigns', () => HttpResponse.json({ campaigns: [] })),
   // The volunteer home shows my workdays and this year's hours: nothing yet, unless a test says otherwise.
   http.get('/api/me/workdays', () => HttpResponse.json({ workdays: [] })),
   http.get('/api/me/hours', () => HttpResponse.json({ rows: [], totalMinutes: 0, totalHours: 0, workdaysAttended: 0 })),

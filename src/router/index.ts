@@ -49,10 +49,21 @@ export type AppRouteName =
   | 'workday-manage'
   | 'workday-roster'
   | 'workday-check-in'
+  | 'workday-trips'
+  | 'workday-planting'
+  | 'monitoring-visits'
+  | 'monitoring-visit'
+  | 'reports'
+  | 'fleet'
   | 'workday-calendar'
   | 'workday'
   | 'my-workdays'
   | 'my-hours'
+  | 'sponsor-campaigns'
+  | 'sponsor-thanks'
+  | 'sponsor'
+  | 'campaigns-admin'
+  | 'donations'
   | 'no-access'
   | 'not-found';
 
@@ -119,6 +130,42 @@ export const routes: AppRouteRecord[] = [
     component: () => import('@/views/WorkdayCheckInView.vue'),
     meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Check-in' },
   },
+  {
+    path: '/workdays/:id/trips',
+    name: 'workday-trips',
+    component: () => import('@/views/TripBoardView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Trip plan' },
+  },
+  {
+    path: '/workdays/:id/planting',
+    name: 'workday-planting',
+    component: () => import('@/views/WorkdayPlantingView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Record planting' },
+  },
+  {
+    path: '/monitoring',
+    name: 'monitoring-visits',
+    component: () => import('@/views/MonitoringVisitsView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Monitoring' },
+  },
+  {
+    path: '/monitoring/:id',
+    name: 'monitoring-visit',
+    component: () => import('@/views/MonitoringVisitView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Monitoring visit' },
+  },
+  {
+    path: '/reports',
+    name: 'reports',
+    component: () => import('@/views/ReportsView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Reports' },
+  },
+  {
+    path: '/fleet',
+    name: 'fleet',
+    component: () => import('@/views/FleetView.vue'),
+    meta: { requiresAuth: true, roles: ['coordinator', 'admin'], title: 'Fleet' },
+  },
   { path: '/sites', name: 'sites', component: () => import('@/views/SitesView.vue'), meta: { requiresAuth: true, title: 'Sites' } },
   {
     path: '/sites/new',
@@ -143,6 +190,17 @@ export const routes: AppRouteRecord[] = [
   { path: '/workdays/:id', name: 'workday', component: () => import('@/views/WorkdayView.vue'), meta: { title: 'Workday' } },
   { path: '/my/workdays', name: 'my-workdays', component: () => import('@/views/MyWorkdaysView.vue'), meta: { requiresAuth: true, title: 'My workdays' } },
   { path: '/my/hours', name: 'my-hours', component: () => import('@/views/MyHoursView.vue'), meta: { requiresAuth: true, title: 'My hours' } },
+  // Public: donors need no account. The thank-you path is listed before /sponsor/:campaignId so it isn't taken for an id.
+  { path: '/sponsor', name: 'sponsor-campaigns', component: () => import('@/views/SponsorCampaignsView.vue'), meta: { title: 'Sponsor a tree' } },
+  { path: '/sponsor/thanks', name: 'sponsor-thanks', component: () => import('@/views/SponsorThanksView.vue'), meta: { title: 'Thank you' } },
+  { path: '/sponsor/:campaignId', name: 'sponsor', component: () => import('@/views/SponsorView.vue'), meta: { title: 'Sponsor a tree' } },
+  {
+    path: '/settings/campaigns',
+    name: 'campaigns-admin',
+    component: () => import('@/views/CampaignsAdminView.vue'),
+    meta: { requiresAuth: true, roles: ['admin'], title: 'Campaigns' },
+  },
+  { path: '/donations', name: 'donations', component: () => import('@/views/DonationsView.vue'), meta: { requiresAuth: true, roles: ['admin'], title: 'Donations' } },
   { path: '/account', name: 'account', component: () => import('@/views/AccountView.vue'), meta: { requiresAuth: true, title: 'My account' } },
   { path: '/no-access', name: 'no-access', component: () => import('@/views/NoAccessView.vue'), meta: { requiresAuth: true, title: 'Not for your role' } },
   { path: '/:pathMatch(.*)*', name: 'not-found', component: () => import('@/views/NotFoundView.vue'), meta: { title: 'Page not found' } },

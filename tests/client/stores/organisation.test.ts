@@ -66,7 +66,7 @@ describe('useOrganisationStore', () => {
 
     store.setOrganisation(buildSettings({ name: 'Renamed Trust', units: 'm' }));
 
-    expect(store.organisation).toEqual({ name: 'Renamed Trust', isDemo: false, units: 'm', timeZone: 'America/New_York' });
+    expect(store.organisation).toEqual({ name: 'Renamed Trust', isDemo: false, units: 'm', timeZone: 'America/New_York', currency: 'usd' });
     expect(store.unitName).toBe('metres');
   });
 });

@@ -7,14 +7,16 @@ export class AppError extends Error {
     readonly code: ErrorCode,
     message: string,
     readonly fields?: Record<string, string[]>,
+    /** Structured reasons, written as `error.violations` beside `fields`. */
+    readonly violations?: unknown[],
   ) {
     super(message);
   }
 }
 
 export class ValidationError extends AppError {
-  constructor(message: string, fields?: Record<string, string[]>) {
-    super(400, 'validation_failed', message, fields);
+  constructor(message: string, fields?: Record<string, string[]>, violations?: unknown[]) {
+    super(400, 'validation_failed', message, fields, violations);
   }
 }
 

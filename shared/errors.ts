@@ -23,6 +23,8 @@ export const ErrorBody = z.object({
     code: ErrorCode,
     message: z.string(),
     fields: z.record(z.string(), z.array(z.string())).optional(),
+    /** Structured reasons where a feature has them (e.g. a refused trip-plan edit's broken rules). */
+    violations: z.array(z.unknown()).optional(),
   }),
 });
 export type ErrorBody = z.infer<typeof ErrorBody>;

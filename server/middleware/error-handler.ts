@@ -29,7 +29,7 @@ export function errorHandler(opts: { exposeStack: boolean; log: (line: string) =
     const status = known?.status ?? 500;
     const body: ErrorBody = {
       error: known
-        ? { code: known.code, message: known.message, ...(known.fields ? { fields: known.fields } : {}) }
+        ? { code: known.code, message: known.message, ...(known.fields ? { fields: known.fields } : {}), ...(known.violations ? { violations: known.violations } : {}) }
         : { code: 'internal_error', message: 'Something went wrong on our side' },
     };
     if (!known) {

@@ -4,10 +4,11 @@ import type { BuildTripPlanBody, EditTripPlanBody, TripInstanceBody } from '../.
 import { TripPlan } from '../db/entities/trip-plan.entity.js';
 import { Workday } from '../db/entities/workday.entity.js';
 import { instanceFromJson, runFromJson, validateTripPlan, type TripInstanceJson, type TripPlanJson, type TripRunJson } from '../domain/trips/index.js';
-import { NotFoundError, ValidationError } from '../errors.js';
+import { NotFoundError } from '../errors.js';
 import type { FleetService } from './fleet.service.js';
 import { createDayCapacity } from './trip-plan-capacity.js';
 import { editedPlan } from './trip-plan-edit.js';
+import { refusal } from './trip-plan-refusal.js';
 import { workdayInstance } from './trip-plan-instance.js';
 import { loadTripRules } from './trip-plan-rules.js';
 import type { TripSolver } from './trip-plan-solver.js';
@@ -68,19 +69,22 @@ export function createTripPlanService(deps: { db: DataSource; fleet: FleetServic
     /** Validated against the stored instance under a row lock, so a rebuild meanwhile cannot pair it with another instance. */
     async edit(workdayId: string, body: EditTripPlanBody, userId: string): Promise<StoredTripPlan> {
       await workday(workdayId);
-      return deps.db.transaction(async (tx) => {
+      const runs: TripRunJson[] = body.runs.map((r) => ({ ...r, loadKg: r.loadKg ?? 0, loadShare: r.loadShare ?? 0 }));
+      const outcome = await deps.db.transaction(async (tx) => {
         const repo = tx.getRepository(TripPlan);
         const row = await repo.findOne({ where: { workdayId }, lock: { mode: 'pessimistic_write' } });
         if (!row) throw new NotFoundError('Trip plan');
         const current = toStored(row);
-        const runs: TripRunJson[] = body.runs.map((r) => ({ ...r, loadKg: r.loadKg ?? 0, loadShare: r.loadShare ?? 0 }));
         const violations = validateTripPlan(instanceFromJson(current.instance), { runs: runs.map(runFromJson) });
-        if (violations.length) throw new ValidationError('The edited plan breaks a rule', { runs: violations.map((v) => v.message) });
+        if (violations.length) return { refused: true as const, instance: current.instance, violations };
         const plan = editedPlan(current.instance, current.plan, runs);
         Object.assign(row, { plan: plan as unknown as Record<string, unknown>, source: 'edited', updatedById: userId });
         await repo.save(row);
-        return { instance: current.instance, plan, source: 'edited' as const };
+        return { refused: false as const, saved: { instance: current.instance, plan, source: 'edited' as const } };
       });
+      // Names for the messages are read after the lock is released: nothing was written.
+      if (outcome.refused) throw await refusal(deps.db, workdayId, outcome.instance, runs, outcome.violations);
+      return outcome.saved;
     },
 
     /** Trees a saved workday can plant and the crew per role it needs. */

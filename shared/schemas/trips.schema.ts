@@ -159,3 +159,40 @@ export const EditTripPlanBody = z.object({ runs: z.array(TripRunInput).max(5000)
 export type EditTripPlanBody = z.infer<typeof EditTripPlanBody>;
 
 export const WorkdayIdParams = z.object({ id: z.uuid({ message: 'must be a workday id' }) });
+
+/**
+ * One rule a refused `PUT /api/workdays/:id/trip-plan` breaks, in `error.violations` of its 400
+ * (beside `error.fields`, see `TripPlanRefusal`). `rule` is one of: unknown-craft, unknown-person,
+ * run-order, timing, seats, load, pot-slots, pots-total, skipper (nobody aboard every run),
+ * operator, own-kayak, paddler, travels-once, guardian, return (the ride back at the close),
+ * window (unloaded after it closes), planting-time. `craftId` and `run` say where it is (a
+ * craft-wide rule has no run; a plan-wide one neither); `personIds` whom it is about (a minor,
+ * then their guardian). `facts` holds its figures: masses in kg, instants as ISO strings.
+ * `message` is for people: craft and people by name, masses in the organisation's unit (lb
+ * where it works in feet, kg in metres), times on its zone's clock.
+ */
+export const TripViolationDto = z.object({
+  rule: z.string(),
+  craftId: z.string().optional(),
+  run: z.number().int().optional(),
+  personIds: z.array(z.string()).optional(),
+  facts: z.record(z.string(), z.union([z.number(), z.string(), z.array(z.union([z.number(), z.string()]))])).optional(),
+  message: z.string(),
+});
+export type TripViolationDto = z.infer<typeof TripViolationDto>;
+
+/**
+ * The 400 of a refused edit. `fields.runs` lists every message (as before); each message is also
+ * under the body path it concerns, so a client can place it without reading the text:
+ * `runs.<i>` for the i-th run sent, `runs.<i>.craftId` for a craft-wide rule (its first run sent),
+ * `_` for the whole plan.
+ */
+export const TripPlanRefusal = z.object({
+  error: z.object({
+    code: z.literal('validation_failed'),
+    message: z.string(),
+    fields: z.record(z.string(), z.array(z.string())),
+    violations: z.array(TripViolationDto),
+  }),
+});
+export type TripPlanRefusal = z.infer<typeof TripPlanRefusal>;

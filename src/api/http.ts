@@ -6,13 +6,16 @@ export class ApiError extends Error {
   readonly status: number;
   readonly code: ErrorCode;
   readonly fields: Record<string, string[]> | undefined;
+  /** Structured reasons some endpoints add (e.g. a refused trip-plan edit); each caller parses its own. */
+  readonly violations: unknown[] | undefined;
 
-  constructor(status: number, code: ErrorCode, message: string, fields?: Record<string, string[]>) {
+  constructor(status: number, code: ErrorCode, message: string, fields?: Record<string, string[]>, violations?: unknown[]) {
     super(message);
     this.name = 'ApiError';
     this.status = status;
     this.code = code;
     this.fields = fields;
+    this.violations = violations;
   }
 }
 
@@ -69,8 +72,8 @@ async function readJson(res: Response): Promise<unknown> {
 async function toApiError(res: Response): Promise<ApiError> {
   const parsed = ErrorBody.safeParse(await readJson(res));
   if (parsed.success) {
-    const { code, message, fields } = parsed.data.error;
-    return new ApiError(res.status, code, message, fields);
+    const { code, message, fields, violations } = parsed.data.error;
+    return new ApiError(res.status, code, message, fields, violations);
   }
   return new ApiError(res.status, 'internal_error', `Something went wrong on the server (HTTP ${res.status}).`);
 }

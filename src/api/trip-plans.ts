@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { CraftKind } from '@shared/schemas/crew.schema';
-import type { BuildTripPlanBody, TripRunInput } from '@shared/schemas/trips.schema';
+import { TripViolationDto, type BuildTripPlanBody, type TripRunInput } from '@shared/schemas/trips.schema';
 import { ApiError, get, post, put } from './http';
 
 /*
@@ -23,7 +23,12 @@ export const TripRunDto = z.object({
 });
 export type TripRunDto = z.infer<typeof TripRunDto>;
 
-const Reasoned = { reason: z.string(), detail: z.string() };
+/** `refs` name the craft, people and instant a reason is about, so screens can word it themselves. */
+const Reasoned = {
+  reason: z.string(),
+  detail: z.string(),
+  refs: z.object({ craftIds: z.array(z.string()).optional(), personIds: z.array(z.string()).optional(), at: Instant.optional() }).optional(),
+};
 
 export const TripPlanDto = z.object({
   status: z.enum(['optimal', 'feasible', 'infeasible']),
@@ -92,10 +97,18 @@ export async function buildTripPlan(workdayId: string, body: BuildTripPlanBody =
 
 /**
  * Saves hand-edited runs. The server checks them against every rule of the planner and answers
- * 400 `validation_failed` with one message per broken rule in `fields.runs`, storing nothing.
+ * 400 `validation_failed`, storing nothing: each broken rule as a message under the body path it
+ * concerns (`fields`) and as data in `violations` (read them with `refusalViolations`).
  */
 export async function saveTripPlan(workdayId: string, runs: TripRunInput[]): Promise<StoredTripPlan> {
   return put(planPath(workdayId), { runs }, StoredTripPlan);
+}
+
+/** The broken rules of a refused edit, as data; [] for any other error. */
+export function refusalViolations(err: unknown): TripViolationDto[] {
+  if (!(err instanceof ApiError) || !err.violations) return [];
+  const parsed = z.array(TripViolationDto).safeParse(err.violations);
+  return parsed.success ? parsed.data : [];
 }
 
 /** Printable trip sheet (PDF), for a plain download link. */

@@ -1,8 +1,8 @@
 import { ref, type Ref } from 'vue';
 import { ApiError } from '@/api/http';
-import { saveTripPlan, type StoredTripPlan } from '@/api/trip-plans';
+import { saveTripPlan, type StoredTripPlan, type TripRunDto } from '@/api/trip-plans';
 import { errorMessage } from '@/utils/error-message';
-import { placeViolations, type PlacedViolation, type TripNames } from '@/utils/trip-board';
+import { placeRefusal, type PlacedViolation, type TripNames } from '@/utils/trip-board';
 import { applyEdit, describeEdit, toRunInputs, type TripEdit } from '@/utils/trip-edits';
 
 export interface TripRejection {
@@ -11,13 +11,13 @@ export interface TripRejection {
   violations: PlacedViolation[];
 }
 
-/** The server's reasons: one message per broken rule in `fields.runs` (or any other field), else the message. */
-function reasons(err: unknown): string[] {
+/** The server's reasons, each beside the run it concerns (see `placeRefusal`); else the error's message. */
+function reasons(err: unknown, sent: readonly TripRunDto[]): PlacedViolation[] {
   if (err instanceof ApiError && err.code === 'validation_failed' && err.fields) {
-    const all = Object.values(err.fields).flat();
-    if (all.length > 0) return all;
+    const placed = placeRefusal(err.fields, sent);
+    if (placed.length > 0) return placed;
   }
-  return [errorMessage(err, { not_found: 'The plan is gone. Build it again.', conflict: 'Someone changed the plan meanwhile. Reload the page.' })];
+  return [{ text: errorMessage(err, { not_found: 'The plan is gone. Build it again.', conflict: 'Someone changed the plan meanwhile. Reload the page.' }) }];
 }
 
 /**
@@ -44,7 +44,7 @@ export function useTripBoardEdits(id: Ref<string>, stored: Ref<StoredTripPlan | 
       lastSaved.value = describeEdit(change, names.value);
       return true;
     } catch (err) {
-      rejection.value = { edit: describeEdit(change, names.value), violations: placeViolations(reasons(err), runs, names.value) };
+      rejection.value = { edit: describeEdit(change, names.value), violations: reasons(err, runs) };
       return false;
     } finally {
       saving.value = false;

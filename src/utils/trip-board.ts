@@ -116,16 +116,23 @@ export interface PlacedViolation {
   craftId?: string;
 }
 
-const escape = (s: string) => s.replace(/[.*+?^${}()|[\]\\]/g, '\\$&');
+const RUN_PATH = /^runs\.(\d+)(?:\.(.+))?$/;
 
-/** Puts each of the server's rule messages beside the run (or craft) it names, with names for ids. */
-export function placeViolations(messages: readonly string[], runs: readonly TripRunDto[], names: TripNames): PlacedViolation[] {
-  return messages.map((message) => {
-    const text = humanize(message, names);
-    const run = runs.find((r) => new RegExp(`${escape(r.craftId)} runs? ${r.run}(?!\\d)`).test(message));
-    if (run) return { text, runKey: `${run.craftId}#${run.run}`, craftId: run.craftId };
-    const craft = runs.find((r) => message.includes(r.craftId));
-    return craft ? { text, craftId: craft.craftId } : { text };
+/**
+ * Puts each reason of a refused edit beside the run or craft it concerns. The server files each
+ * message (already in names, the organisation's units and zone) under the body path it is about:
+ * `runs.<i>` for the i-th run sent, `runs.<i>.craftId` for the craft of that run, `_` for the
+ * whole plan; `runs` repeats them all and is read only when nothing else came.
+ */
+export function placeRefusal(fields: Readonly<Record<string, readonly string[]>>, sent: readonly TripRunDto[]): PlacedViolation[] {
+  const placed = Object.entries(fields).filter(([path]) => path !== 'runs');
+  if (placed.length === 0) return (fields.runs ?? []).map((text) => ({ text }));
+  return placed.flatMap(([path, texts]) => {
+    const m = RUN_PATH.exec(path);
+    const run = m ? sent[Number(m[1])] : undefined;
+    if (!run) return texts.map((text) => ({ text }));
+    if (m?.[2] === 'craftId') return texts.map((text) => ({ text, craftId: run.craftId }));
+    return texts.map((text) => ({ text, runKey: `${run.craftId}#${run.run}`, craftId: run.craftId }));
   });
 }
 

@@ -1,5 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { ErrorBody } from '../../shared/errors.js';
+import { TripPlanRefusal } from '../../shared/schemas/trips.schema.js';
+import { Craft } from '../../server/db/entities/craft.entity.js';
+import { Organisation } from '../../server/db/entities/organisation.entity.js';
+import { User } from '../../server/db/entities/user.entity.js';
 import { TripPlan } from '../../server/db/entities/trip-plan.entity.js';
 import { instanceFromJson, runFromJson, validateTripPlan, type TripInstanceJson, type TripPlanJson, type TripRunJson } from '../../server/domain/trips/index.js';
 import { buildCraft } from '../factories/craft.factory.js';
@@ -129,6 +133,39 @@ describe('/api/workdays/:id/trip-plan', () => {
     expect(saved.status).toBe(200);
     expect(saved.body.source).toBe('edited');
     expect((await t.db.getRepository(TripPlan).findOneByOrFail({ workdayId: workday.id })).source).toBe('edited');
+  });
+
+  it('answers a refused edit with structured violations, in names, pounds and local time for a feet organisation', async () => {
+    const org = await t.db.getRepository(Organisation).findOneByOrFail({ id: 1 });
+    await t.db.getRepository(Organisation).update({ id: 1 }, { units: 'ft', timeZone: 'America/New_York' });
+    const { workday, canoe, paddler, seat, planter } = await plannedWorkday();
+    await t.db.getRepository(User).update({ id: planter.id }, { name: 'Rosa Planter' });
+    const craftName = (await t.db.getRepository(Craft).findOneByOrFail({ id: canoe.id })).name;
+    const { agent, token } = await authAgentFor(t, 'coordinator');
+    const built = await agent.post(`/api/workdays/${workday.id}/trip-plan`).set('X-CSRF-Token', token).send({ plantingMinutesPerTree: 5 }).expect(201);
+    const runs = (built.body.plan as TripPlanJson).runs;
+    const index = runs.findIndex((r) => r.craftId === canoe.id && r.run === 1);
+    // Three people and six pots in a two-seat canoe rated 350 kg (245 kg at the 70 % margin).
+    const broken = runs.map((r, i) => (i === index ? { ...r, people: [paddler.id, seat.id, planter.id], pots: 6 } : r));
+    const res = await agent.put(`/api/workdays/${workday.id}/trip-plan`).set('X-CSRF-Token', token).send({ runs: broken });
+    expect(res.status).toBe(400);
+    const { error } = TripPlanRefusal.parse(res.body);
+    expect(error.code).toBe('validation_failed');
+    const seats = error.violations.find((v) => v.rule === 'seats');
+    expect(seats).toEqual({ rule: 'seats', craftId: canoe.id, run: 1, facts: { count: 3, limit: 2 }, message: `${craftName} run 1 carries 3 people but has 2 seats` });
+    const load = error.violations.find((v) => v.rule === 'load');
+    expect(load).toMatchObject({ craftId: canoe.id, run: 1, facts: { ratedKg: 350, limitKg: expect.closeTo(245, 6) } });
+    // 350 kg = 771.6 lb and 245 kg = 540.1 lb (1 lb = 0.45359237 kg exactly, 1959 agreement).
+    expect(load?.message).toMatch(new RegExp(`^${craftName} run 1 would carry [\\d,]+ lb, over its load margin of 540 lb \\(70 % of its rated 772 lb\\)$`));
+    for (const v of error.violations) expect(v.message).not.toMatch(/\bkg\b|UTC|[0-9a-f]{8}-[0-9a-f]{4}/);
+    // Every message stays in `fields.runs`, and is also filed under the run it concerns.
+    expect(error.fields.runs).toEqual(error.violations.map((v) => v.message));
+    expect(error.fields[`runs.${index}`]).toEqual(expect.arrayContaining([seats!.message, load!.message]));
+    await t.db.getRepository(Organisation).update({ id: 1 }, { units: 'm' });
+    const metric = await agent.put(`/api/workdays/${workday.id}/trip-plan`).set('X-CSRF-Token', token).send({ runs: broken });
+    const metricLoad = TripPlanRefusal.parse(metric.body).error.violations.find((v) => v.rule === 'load');
+    expect(metricLoad?.message).toMatch(/over its load margin of 245 kg \(70 % of its rated 350 kg\)$/);
+    await t.db.getRepository(Organisation).update({ id: 1 }, { units: org.units, timeZone: org.timeZone });
   });
 
   it('answers 404 for a PUT before any plan exists', async () => {

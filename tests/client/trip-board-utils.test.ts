@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { craftMargin, humanize, loadState, placeViolations, planStatus, tripLanes, tripNames } from '@/utils/trip-board';
+import { craftMargin, humanize, loadState, placeRefusal, planStatus, tripLanes, tripNames } from '@/utils/trip-board';
 import { ASHORE, applyEdit, describeEdit, movePlaces, toRunInputs } from '@/utils/trip-edits';
 import { formatLoad, formatRating, formatShare, formatSpeed, knots } from '@/utils/trip-format';
 import { buildTripTimeline } from '@/utils/trip-timeline';
@@ -74,14 +74,30 @@ describe('names and messages', () => {
     expect(humanize(`own-${IDS.ben} belongs to ${IDS.ben}: only ${IDS.ben} may paddle it`, withOwn)).toBe('Ben Okoro’s own sit-on-top kayak belongs to Ben Okoro: only Ben Okoro may paddle it');
   });
 
-  it('places each rule message beside the run it names, telling run 1 from run 10', () => {
-    const many = [...runs, { ...runs[0]!, run: 10 }];
-    const placed = placeViolations([`${IDS.skiff} run 10 carries 6 people but has 5 seats`, `${IDS.skiff} needs someone with the operator skill aboard every run; none is`, 'the runs carry 19 pots but only 18 are ready'], many, names);
+  it('places each reason of a refused edit by the body path the server files it under', () => {
+    // The runs as sent, with a run 10 to tell it from run 1.
+    const sent = [...runs, { ...runs[0]!, run: 10 }];
+    const last = sent.length - 1;
+    const placed = placeRefusal(
+      {
+        runs: ['Skimmer run 10 carries 6 people but has 5 seats', 'Skimmer needs someone with the boat operator skill aboard every run; none is', 'The runs carry 19 pots but only 18 are ready'],
+        [`runs.${last}`]: ['Skimmer run 10 carries 6 people but has 5 seats'],
+        'runs.0.craftId': ['Skimmer needs someone with the boat operator skill aboard every run; none is'],
+        _: ['The runs carry 19 pots but only 18 are ready'],
+        'runs.99': ['A run the client did not send'],
+      },
+      sent,
+    );
     expect(placed).toEqual([
       { text: 'Skimmer run 10 carries 6 people but has 5 seats', runKey: `${IDS.skiff}#10`, craftId: IDS.skiff },
-      { text: 'Skimmer needs someone with the operator skill aboard every run; none is', craftId: IDS.skiff },
-      { text: 'the runs carry 19 pots but only 18 are ready' },
+      { text: 'Skimmer needs someone with the boat operator skill aboard every run; none is', craftId: sent[0]!.craftId },
+      { text: 'The runs carry 19 pots but only 18 are ready' },
+      { text: 'A run the client did not send' },
     ]);
+  });
+
+  it('falls back to the plain list when the server files nothing by path', () => {
+    expect(placeRefusal({ runs: ['Something is wrong'] }, runs)).toEqual([{ text: 'Something is wrong' }]);
   });
 
   it('orders lanes by first departure and keeps idle craft last with their reason', () => {

@@ -86,21 +86,38 @@ describe('TripBoardView', () => {
     await waitFor(() => expect(document.activeElement).toBe(moved));
   });
 
-  it('shows the rules a refused edit breaks beside its run, and keeps the board as it was', async () => {
-    const refuse = () =>
-      errorResponse(400, 'validation_failed', 'The edited plan breaks a rule', {
-        runs: [`${IDS.canoe} run 1 carries 4 people but has 3 seats`, `${IDS.canoe} brings its 4 people back at the close but has 3 seats`],
+  it('shows the rules a refused edit breaks beside the run, craft or plan the server files them under', async () => {
+    // As the server answers (see TripPlanRefusal): messages in names, each under the body path
+    // it concerns; `runs` repeats them all. Placement reads the paths, never the text: the first
+    // message names Skimmer run 1 yet belongs beside Tarpon run 1.
+    const refuse = (body: { runs: { craftId: string; run: number }[] }) => {
+      const canoe = body.runs.findIndex((r) => r.craftId === IDS.canoe && r.run === 1);
+      const seats = 'Tarpon run 1 carries 4 people but has 3 seats (Cleo Marsh came from Skimmer run 1)';
+      const paddler = 'Tarpon needs an adult with the paddler skill aboard every run; none is';
+      const plan = 'The runs carry 19 pots but only 18 are ready';
+      return errorResponse(400, 'validation_failed', 'The edited plan breaks a rule', {
+        runs: [seats, paddler, plan],
+        [`runs.${canoe}`]: [seats],
+        [`runs.${canoe}.craftId`]: [paddler],
+        _: [plan],
       });
+    };
     const { main, seen } = await openBoard({ onSave: refuse });
     const user = userEvent.setup();
     await user.click(await main.findByRole('button', { name: 'Move Cleo Marsh to…' }));
     await user.click(await screen.findByRole('menuitem', { name: /Tarpon run 1/ }));
 
     await waitFor(() => expect(seen.saved).toHaveLength(1));
-    expect(await main.findByText('Not saved: moving Cleo Marsh from Skimmer run 1 to Tarpon run 1 breaks a rule. The plan is as it was.')).toBeTruthy();
+    const alert = await main.findByText('Not saved: moving Cleo Marsh from Skimmer run 1 to Tarpon run 1 breaks a rule. The plan is as it was.');
+    expect(alert).toBeTruthy();
     const run = within(main.getByRole('article', { name: 'Tarpon run 1' }));
-    expect(run.getByRole('alert').textContent).toContain('Tarpon run 1 carries 4 people but has 3 seats');
-    expect(within(main.getByRole('region', { name: 'Tarpon' })).getByText('Tarpon brings its 4 people back at the close but has 3 seats')).toBeTruthy();
+    expect(run.getByRole('alert').textContent).toBe('Tarpon run 1 carries 4 people but has 3 seats (Cleo Marsh came from Skimmer run 1)');
+    expect(within(main.getByRole('article', { name: 'Skimmer run 1' })).queryByRole('alert')).toBeNull();
+    const lane = within(main.getByRole('region', { name: 'Tarpon' }));
+    expect(lane.getByText('Tarpon needs an adult with the paddler skill aboard every run; none is')).toBeTruthy();
+    expect(main.getByText('The runs carry 19 pots but only 18 are ready')).toBeTruthy();
+    // Each message shows once, in its place.
+    expect(main.getAllByText(/carries 4 people/)).toHaveLength(1);
     // Nothing moved: Cleo is still aboard the skiff, and the canoe still shows three aboard.
     expect(within(main.getByRole('list', { name: 'Aboard Skimmer run 1' })).getByText('Cleo Marsh')).toBeTruthy();
     expect(run.getByText('Aboard: 3 of 3 seats')).toBeTruthy();

@@ -2,13 +2,22 @@
  * The API's edge of the planner: instants are ISO 8601 strings there and epoch milliseconds
  * inside the domain. Parsing assumes strings the route's schema already checked.
  */
-import type { TripInstance, TripPlan, TripRun } from './types.js';
+import type { IdleCraft, ReasonRefs, TripInstance, TripPlan, TripRun, UnplacedPerson, UnplacedPots } from './types.js';
 
 export type TripInstanceJson = Omit<TripInstance, 'window'> & { window: { start: string; end: string } };
 
 export type TripRunJson = Omit<TripRun, 'departAt' | 'landAt' | 'returnAt'> & { departAt: string; landAt: string; returnAt: string };
 
-export type TripPlanJson = Omit<TripPlan, 'runs' | 'lastLandingAt'> & { runs: TripRunJson[]; lastLandingAt: string | null };
+/** A reason's references with the instant as an ISO string. */
+export type ReasonRefsJson = Omit<ReasonRefs, 'at'> & { at?: string };
+type WithRefsJson<T> = Omit<T, 'refs'> & { refs?: ReasonRefsJson };
+
+export type TripPlanJson = Omit<TripPlan, 'runs' | 'lastLandingAt' | 'unplaced' | 'idleCraft'> & {
+  runs: TripRunJson[];
+  lastLandingAt: string | null;
+  unplaced: { pots: number; potReasons: WithRefsJson<UnplacedPots>[]; people: WithRefsJson<UnplacedPerson>[] };
+  idleCraft: WithRefsJson<IdleCraft>[];
+};
 
 const iso = (ms: number) => new Date(ms).toISOString();
 
@@ -25,5 +34,19 @@ export const runFromJson = (r: TripRunJson): TripRun => ({ ...r, departAt: Date.
 
 /** A plan with ISO times, as the API sends it. */
 export function planToJson(plan: TripPlan): TripPlanJson {
-  return { ...plan, runs: plan.runs.map(runToJson), lastLandingAt: plan.lastLandingAt === null ? null : iso(plan.lastLandingAt) };
+  const { unplaced } = plan;
+  return {
+    ...plan,
+    runs: plan.runs.map(runToJson),
+    lastLandingAt: plan.lastLandingAt === null ? null : iso(plan.lastLandingAt),
+    unplaced: { ...unplaced, potReasons: unplaced.potReasons.map(refsToJson), people: unplaced.people.map(refsToJson) },
+    idleCraft: plan.idleCraft.map(refsToJson),
+  };
+}
+
+function refsToJson<T extends { refs?: ReasonRefs }>(item: T): WithRefsJson<T> {
+  const { refs, ...rest } = item;
+  if (!refs) return rest;
+  const { at, ...ids } = refs;
+  return { ...rest, refs: { ...ids, ...(at === undefined ? {} : { at: iso(at) }) } };
 }

@@ -9,3 +9,4 @@ export { initTripSolver } from './milp-solve.js';
 export { dayCapacity, type DayCapacity, type DayCapacityInput } from './capacity.js';
 export { ruleOfThumbPersons, personsFromWeightCapacity183_41, personsFromManualWeightCapacity183_43 } from './rules-of-thumb.js';
 export * from './api.js';
+export { violationText, type ViolationWords } from './violation-text.js';

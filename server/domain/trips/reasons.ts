@@ -3,17 +3,25 @@ import { lightestPotKg, runTiming, type PersonInfo, type TripContext } from './c
 import { crewKg, draftArrivals, draftDrops, runPotKg, runRoom, type Draft } from './draft.js';
 import { clock, kg } from './format.js';
 import { plantingSlots } from './planting.js';
-import type { IdleCraft, UnplacedPerson, UnplacedPots, UnplacedReason } from './types.js';
+import type { IdleCraft, ReasonRefs, UnplacedPerson, UnplacedPots, UnplacedReason } from './types.js';
+
+/** Every id and the instant (the same window close) the reasons name. */
+function mergeRefs(all: readonly (ReasonRefs | undefined)[]): ReasonRefs {
+  const craftIds = [...new Set(all.flatMap((r) => r?.craftIds ?? []))];
+  const personIds = [...new Set(all.flatMap((r) => r?.personIds ?? []))];
+  const at = all.find((r) => r?.at !== undefined)?.at;
+  return { ...(craftIds.length ? { craftIds } : {}), ...(personIds.length ? { personIds } : {}), ...(at === undefined ? {} : { at }) };
+}
 
 /** When nothing goes out: the crafts' shared reason, or `no-craft` with each craft's. */
-function fleetReason(idle: readonly IdleCraft[]): { reason: UnplacedReason; detail: string } {
+function fleetReason(idle: readonly IdleCraft[]): { reason: UnplacedReason; detail: string; refs: ReasonRefs } {
   const reasons = [...new Set(idle.map((i) => i.reason))];
   const only = reasons.length === 1 ? reasons[0] : undefined;
   const detail = idle.length ? `no craft can go out: ${idle.map((i) => i.detail).join('; ')}` : 'the fleet is empty';
-  return { reason: only && only !== 'not-needed' ? only : 'no-craft', detail };
+  return { reason: only && only !== 'not-needed' ? only : 'no-craft', detail, refs: mergeRefs(idle.map((i) => i.refs)) };
 }
 
-function seatReason(ctx: TripContext, draft: Draft, group: readonly PersonInfo[]): { reason: UnplacedReason; detail: string } {
+function seatReason(ctx: TripContext, draft: Draft, group: readonly PersonInfo[]): { reason: UnplacedReason; detail: string; refs?: ReasonRefs } {
   const groupKg = group.reduce((w, p) => w + p.weightKg, 0);
   const open = draft.crews.flatMap((crew, c) => {
     const info = ctx.crafts[c];
@@ -24,16 +32,16 @@ function seatReason(ctx: TripContext, draft: Draft, group: readonly PersonInfo[]
   const light = open.filter((o) => crewKg(ctx, o.crew, 1) + groupKg <= o.info.capKg + 1e-9);
   if (light.length === 0) return { reason: 'over-load', detail: `no craft with ${who} free can take another ${kg(groupKg)} within its load margin` };
   const withPots = light.filter((o) => crewKg(ctx, o.crew, 1) + groupKg + runPotKg(ctx, draft, o.c, 1) <= o.info.capKg + 1e-9);
-  if (withPots.length === 0) return { reason: 'over-load', detail: `a seat is free on ${light.map((o) => o.info.craft.id).join(', ')}, but ${kg(groupKg)} more would displace pots from its first run` };
-  return { reason: 'left-ashore', detail: `the plan leaves them ashore although ${withPots[0]?.info.craft.id} has room (the solver stopped early)` };
+  if (withPots.length === 0) return { reason: 'over-load', refs: { craftIds: light.map((o) => o.info.craft.id) }, detail: `a seat is free on ${light.map((o) => o.info.craft.id).join(', ')}, but ${kg(groupKg)} more would displace pots from its first run` };
+  return { reason: 'left-ashore', refs: { craftIds: withPots.slice(0, 1).map((o) => o.info.craft.id) }, detail: `the plan leaves them ashore although ${withPots[0]?.info.craft.id} has room (the solver stopped early)` };
 }
 
 function personReason(ctx: TripContext, draft: Draft, p: PersonInfo, aboard: Set<number>, none: boolean, idle: readonly IdleCraft[]) {
   const g = p.person.guardianId;
-  if (p.minor && g && !ctx.personById.has(g)) return { reason: 'guardian-not-aboard' as const, detail: `their guardian ${g} is not on the crew` };
+  if (p.minor && g && !ctx.personById.has(g)) return { reason: 'guardian-not-aboard' as const, refs: { personIds: [g] }, detail: `their guardian ${g} is not on the crew` };
   const guardian = g ? ctx.personById.get(g) : undefined;
   if (none) return fleetReason(idle);
-  if (p.minor && guardian && !aboard.has(guardian.index)) return { reason: 'guardian-not-aboard' as const, detail: `their guardian ${g} is not going out` };
+  if (p.minor && guardian && !aboard.has(guardian.index)) return { reason: 'guardian-not-aboard' as const, refs: { personIds: [guardian.person.id] }, detail: `their guardian ${g} is not going out` };
   if (p.minor && guardian) {
     const c = draft.crews.findIndex((crew) => crew && (crew.skipper === guardian.index || crew.passengers.includes(guardian.index)));
     const solo: Draft = { crews: draft.crews.map((crew, i) => (i === c ? crew : null)), pots: draft.pots, mix: draft.mix };
@@ -100,7 +108,7 @@ export function unplacedPots(ctx: TripContext, draft: Draft, idle: readonly Idle
   if (heavy.count > 0) out.push({ count: heavy.count, reason: 'too-heavy', detail: `${heavy.count} pots weigh more than the ${kg(heavy.spareKg)} any craft going out can take beside its crew` });
   const movable = count - heavy.count;
   if (transport < movable) {
-    out.push({ count: movable - Math.max(transport, placed), reason: 'window-too-short', detail: `the runs that can be unloaded before the window closes at ${clock(ctx.end)} carry at most ${transport} pots` });
+    out.push({ count: movable - Math.max(transport, placed), reason: 'window-too-short', refs: { at: ctx.end }, detail: `the runs that can be unloaded before the window closes at ${clock(ctx.end)} carry at most ${transport} pots` });
   }
   const rest = Math.min(movable, transport) - placed;
   if (rest <= 0) return out;
@@ -109,6 +117,6 @@ export function unplacedPots(ctx: TripContext, draft: Draft, idle: readonly Idle
   const detail = tight
     ? `the crew at the site (${people} ${people === 1 ? 'person' : 'people'}, planting in pairs) cannot plant more than ${placed} pots before the window closes at ${clock(ctx.end)}`
     : 'the solver stopped before finding room for them';
-  out.push({ count: rest, reason: tight ? 'planting-time' : 'left-ashore', detail });
+  out.push({ count: rest, reason: tight ? 'planting-time' : 'left-ashore', detail, ...(tight ? { refs: { at: ctx.end } } : {}) });
   return out;
 }

@@ -1,6 +1,6 @@
 /** What the trip sheet and the float plan share: lookups, planned times, reason labels, cautions. */
 import { clockTime } from '../workday-time.js';
-import type { TripRunJson } from './api.js';
+import type { ReasonRefsJson, TripRunJson } from './api.js';
 import type { TripCraft } from './types.js';
 import { craftName, sheetClock, sheetDate, zoneAt } from './trip-sheet-format.js';
 import type { SheetCraft, SheetPerson, TripSheetInput } from './trip-sheet-types.js';
@@ -52,19 +52,34 @@ function fromPlan(c: TripCraft): SheetCraft {
 }
 
 /**
- * A planner reason as a sentence. The planner writes ids and UTC clock times; the sheet names
- * people and craft and gives the instant of that clock nearest the window's start in the zone.
+ * A planner reason as a sentence. The planner writes ids and UTC clock times, and lists both in
+ * the reason's `refs`: the sheet names the craft and people it lists and puts the instant on the
+ * zone's clock. A reason stored before `refs` existed falls back to every known id and the
+ * instant of that clock nearest the window's start.
  */
-function explain(named: (SheetPerson | SheetCraft)[], start: number, zoned: (at: number) => string, reason: string, detail: string): string {
-  const names = named.map((n) => [n.id, 'ownerName' in n ? craftName(n) : n.name] as const).sort((a, b) => b[0].length - a[0].length);
-  let text = detail;
+function explain(named: (SheetPerson | SheetCraft)[], start: number, zoned: (at: number) => string, r: SheetReason): string {
+  const listed = r.refs ? new Set([...(r.refs.craftIds ?? []), ...(r.refs.personIds ?? [])]) : null;
+  const names = named
+    .filter((n) => !listed || listed.has(n.id))
+    .map((n) => [n.id, 'ownerName' in n ? craftName(n) : n.name] as const)
+    .sort((a, b) => b[0].length - a[0].length);
+  let text = r.detail;
   for (const [id, name] of names) text = text.replace(new RegExp(`\\b${escape(id)}\\b`, 'g'), () => name);
+  const at = r.refs?.at === undefined ? null : Date.parse(r.refs.at);
   text = text.replace(UTC_CLOCK, (_m, h: string, m: string) => {
+    if (at !== null) return zoned(at);
     const day = Math.floor(start / DAY_MS) * DAY_MS + (Number(h) * 60 + Number(m)) * 60_000;
     return zoned([day - DAY_MS, day, day + DAY_MS].reduce((a, b) => (Math.abs(b - start) < Math.abs(a - start) ? b : a)));
   });
   const sentence = text.charAt(0).toUpperCase() + text.slice(1);
-  return `${reasonLabel(reason)}. ${sentence}${/[.!?]$/.test(sentence) ? '' : '.'}`;
+  return `${reasonLabel(r.reason)}. ${sentence}${/[.!?]$/.test(sentence) ? '' : '.'}`;
+}
+
+/** A planner reason as stored in a plan. */
+export interface SheetReason {
+  reason: string;
+  detail: string;
+  refs?: ReasonRefsJson;
 }
 
 /** Lookups and the plan's key times, in the organisation's zone. */
@@ -107,7 +122,7 @@ export function sheetContext(input: TripSheetInput) {
     lastReturnAt: runs.length ? Math.max(...times((r) => r.returnAt)) : null,
     window: `${at(instance.window.start)} – ${zoned(instance.window.end)}`,
     /** The planner's reason in print: names for ids, the zone's clock for UTC times. */
-    explain: (reason: string, detail: string) => explain([...people.values(), ...craft.values()], Date.parse(instance.window.start), zoned, reason, detail),
+    explain: (r: SheetReason) => explain([...people.values(), ...craft.values()], Date.parse(instance.window.start), zoned, r),
   };
 }
 export type SheetContext = ReturnType<typeof sheetContext>;

@@ -98,9 +98,9 @@ function craftSection(input: TripSheetInput, ctx: SheetContext, c: SheetCraft): 
 
 function ashoreSection(input: TripSheetInput, ctx: SheetContext): SheetSection {
   const { unplaced, warnings } = input.plan;
-  const pots = unplaced.potReasons.map((p) => `${p.count} pot${p.count === 1 ? '' : 's'}: ${ctx.explain(p.reason, p.detail)}`);
-  const people = unplaced.people.map((p) => `${ctx.nameOf(p.id)}: ${ctx.explain(p.reason, p.detail)}`);
-  const idle = (input.plan.idleCraft ?? []).map((i) => `${ctx.craftLabel(i.craftId)}: ${ctx.explain(i.reason, i.detail)}`);
+  const pots = unplaced.potReasons.map((p) => `${p.count} pot${p.count === 1 ? '' : 's'}: ${ctx.explain(p)}`);
+  const people = unplaced.people.map((p) => `${ctx.nameOf(p.id)}: ${ctx.explain(p)}`);
+  const idle = (input.plan.idleCraft ?? []).map((i) => `${ctx.craftLabel(i.craftId)}: ${ctx.explain(i)}`);
   const blocks: SheetBlock[] = [];
   if (unplaced.pots > 0 && pots.length === 0) pots.push(`${unplaced.pots} pots: no reason given.`);
   blocks.push(pots.length ? { kind: 'list', items: pots } : { kind: 'paragraph', text: 'Every pot is placed on a run.' });

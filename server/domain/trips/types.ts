@@ -110,22 +110,36 @@ export type UnplacedReason =
   | 'planting-time'
   | 'left-ashore';
 
+/**
+ * What a reason's `detail` names, so a reader can put names and local times in without parsing
+ * the text: the craft and people it mentions by id and the instant it gives as a UTC clock time
+ * (epoch ms here, ISO in the API).
+ */
+export interface ReasonRefs {
+  craftIds?: string[];
+  personIds?: string[];
+  at?: number;
+}
+
 export interface UnplacedPerson {
   id: string;
   reason: UnplacedReason;
   detail: string;
+  refs?: ReasonRefs;
 }
 
 export interface UnplacedPots {
   count: number;
   reason: UnplacedReason;
   detail: string;
+  refs?: ReasonRefs;
 }
 
 export interface IdleCraft {
   craftId: string;
   reason: UnplacedReason | 'not-needed';
   detail: string;
+  refs?: ReasonRefs;
 }
 
 export type TripPlanStatus = 'optimal' | 'feasible' | 'infeasible';
@@ -149,25 +163,62 @@ export interface TripPlan {
   warnings: string[];
 }
 
-/** One broken rule found by `validateTripPlan`. */
+/**
+ * One broken rule found by `validateTripPlan`: where it is (craft, run, people), the figures
+ * behind it and a plain message with ids, kg and UTC times (for logs and tests). People read
+ * `violationText`'s version, with names, the organisation's units and its time zone.
+ */
 export interface TripViolation {
-  rule:
-    | 'unknown-craft'
-    | 'unknown-person'
-    | 'run-order'
-    | 'timing'
-    | 'seats'
-    | 'load'
-    | 'pot-slots'
-    | 'pots-total'
-    | 'skipper'
-    | 'travels-once'
-    | 'guardian'
-    | 'return'
-    | 'window'
-    | 'planting-time';
+  rule: TripViolationRule;
   craftId?: string;
   run?: number;
-  personId?: string;
+  /** The people it is about (a minor first, then their guardian). */
+  personIds?: string[];
+  facts?: TripViolationFacts;
   message: string;
+}
+
+export type TripViolationRule =
+  | 'unknown-craft'
+  | 'unknown-person'
+  | 'run-order'
+  | 'timing'
+  | 'seats'
+  | 'load'
+  | 'pot-slots'
+  | 'pots-total'
+  | 'skipper'
+  | 'operator'
+  | 'own-kayak'
+  | 'paddler'
+  | 'travels-once'
+  | 'guardian'
+  | 'return'
+  | 'window'
+  | 'planting-time';
+
+/** Figures behind a violation: masses in kg, instants in epoch ms. Which ones are set depends on the rule. */
+export interface TripViolationFacts {
+  /** People, pots or runs counted (seats, pot slots, pots-total, planting-time). */
+  count?: number;
+  /** The limit that count breaks (seats, pot slots, ready pots, pots the crew can plant). */
+  limit?: number;
+  loadKg?: number;
+  /** The load margin in kg (the share `marginShare` of `ratedKg`). */
+  limitKg?: number;
+  ratedKg?: number;
+  marginShare?: number;
+  /** The instant that breaks the rule, and the one it had to respect. */
+  at?: number;
+  by?: number;
+  /** Run numbers involved (run order, travels-once). */
+  runs?: number[];
+  /** Craft involved beside `craftId` (a person riding out in two craft). */
+  craftIds?: string[];
+  /** Planting pairs at the site (planting-time). */
+  pairs?: number;
+  /** Speed of the craft in km/h (a landing time that does not match it). */
+  speedKmh?: number;
+  /** Which time of a run is off (timing). */
+  which?: 'depart' | 'land' | 'return';
 }

@@ -28,7 +28,7 @@ function lastRunOf(runs: readonly TripRun[]): Map<string, number> {
 function checkOnce(id: string, seats: readonly Seat[], last: Map<string, number>, out: TripViolation[]): void {
   const crafts = [...new Set(seats.map((s) => s.craftId))];
   if (crafts.length > 1) {
-    out.push({ rule: 'travels-once', personId: id, message: `${id} rides out in ${crafts.join(' and ')}; a person rides out once and comes back in the same craft` });
+    out.push({ rule: 'travels-once', personIds: [id], facts: { craftIds: crafts }, message: `${id} rides out in ${crafts.join(' and ')}; a person rides out once and comes back in the same craft` });
     return;
   }
   if (seats.length < 2) return;
@@ -36,7 +36,7 @@ function checkOnce(id: string, seats: readonly Seat[], last: Map<string, number>
   const first = runs[0] ?? 0;
   const end = last.get(crafts[0] ?? '') ?? 0;
   if (runs.length !== end - first + 1) {
-    out.push({ rule: 'travels-once', personId: id, message: `${id} rides runs ${runs.join(', ')} of ${crafts[0]}: someone on more than one run crews every run from their first to the craft's last (${first}–${end})` });
+    out.push({ rule: 'travels-once', personIds: [id], craftId: crafts[0], facts: { runs, limit: end }, message: `${id} rides runs ${runs.join(', ')} of ${crafts[0]}: someone on more than one run crews every run from their first to the craft's last (${first}–${end})` });
   }
 }
 
@@ -44,13 +44,13 @@ function checkGuardian(ctx: TripContext, id: string, seats: readonly Seat[], byP
   const guardian = ctx.personById.get(id)?.person.guardianId;
   if (!guardian) return;
   if (!ctx.personById.has(guardian)) {
-    out.push({ rule: 'guardian', personId: id, message: `${id} is a minor whose guardian ${guardian} is not on the crew` });
+    out.push({ rule: 'guardian', personIds: [id, guardian], message: `${id} is a minor whose guardian ${guardian} is not on the crew` });
     return;
   }
   const with_ = byPerson.get(guardian) ?? [];
   for (const s of seats) {
     if (!with_.some((g) => g.craftId === s.craftId && g.run === s.run)) {
-      out.push({ rule: 'guardian', personId: id, craftId: s.craftId, run: s.run, message: `${id} is a minor on ${s.craftId} run ${s.run} without their guardian ${guardian}` });
+      out.push({ rule: 'guardian', personIds: [id, guardian], craftId: s.craftId, run: s.run, message: `${id} is a minor on ${s.craftId} run ${s.run} without their guardian ${guardian}` });
     }
   }
 }
@@ -64,6 +64,7 @@ function checkPlanting(ctx: TripContext, runs: readonly TripRun[], byPerson: Map
   for (const s of plantingShortfalls(ctx, arrivals, drops)) {
     out.push({
       rule: 'planting-time',
+      facts: { count: s.pots, limit: s.capacity, pairs: s.pairs, at: s.readyAt, by: ctx.end },
       message: `${s.pots} pots are unloaded from ${clock(s.readyAt)} on, but the crew at the site (${s.pairs} pairs then) can plant only ${s.capacity} of them by ${clock(ctx.end)}`,
     });
   }

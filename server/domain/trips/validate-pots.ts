@@ -44,7 +44,7 @@ export function resolvePotMasses(ctx: TripContext, runs: readonly TripRun[]): Re
     for (const m of r.potMassesKg ?? []) {
       if (takeOut(pool, m)) masses[i]?.push(m);
       else {
-        violations.push({ rule: 'pots-total', craftId: r.craftId, run: r.run, message: `${r.craftId} run ${r.run} lists a ${kg(m)} pot, but no such pot is ready (or another run lists it)` });
+        violations.push({ rule: 'pots-total', craftId: r.craftId, run: r.run, facts: { loadKg: m }, message: `${r.craftId} run ${r.run} lists a ${kg(m)} pot, but no such pot is ready (or another run lists it)` });
         masses[i]?.push(m);
       }
     }

@@ -21,6 +21,9 @@ import { resolvePotMasses } from './validate-pots.js';
 import { clock, kg } from './format.js';
 import type { TripInstance, TripOptions, TripRun, TripViolation } from './types.js';
 
+/** Ids listed more than once. */
+const twice = (ids: readonly string[]) => [...new Set(ids.filter((id, i) => ids.indexOf(id) !== i))];
+
 function checkRun(ctx: TripContext, r: TripRun, potKg: number, out: TripViolation[]): void {
   const info = ctx.craftById.get(r.craftId);
   const at = { craftId: r.craftId, run: r.run };
@@ -32,30 +35,32 @@ function checkRun(ctx: TripContext, r: TripRun, potKg: number, out: TripViolatio
   let peopleKg = 0;
   for (const id of r.people) {
     const p = ctx.personById.get(id);
-    if (!p) out.push({ rule: 'unknown-person', ...at, personId: id, message: `${name} lists ${id}, who is not on the crew` });
+    if (!p) out.push({ rule: 'unknown-person', ...at, personIds: [id], message: `${name} lists ${id}, who is not on the crew` });
     peopleKg += p?.weightKg ?? 0;
   }
-  if (new Set(r.people).size !== r.people.length) out.push({ rule: 'travels-once', ...at, message: `${name} lists someone twice` });
+  if (new Set(r.people).size !== r.people.length) out.push({ rule: 'travels-once', ...at, personIds: twice(r.people), message: `${name} lists someone twice` });
   if (r.people.length > info.craft.seats) {
-    out.push({ rule: 'seats', ...at, message: `${name} carries ${r.people.length} people but has ${info.craft.seats} seats` });
+    out.push({ rule: 'seats', ...at, facts: { count: r.people.length, limit: info.craft.seats }, message: `${name} carries ${r.people.length} people but has ${info.craft.seats} seats` });
   }
   if (!Number.isInteger(r.pots) || r.pots < 0 || r.pots > info.craft.potSlots) {
-    out.push({ rule: 'pot-slots', ...at, message: `${name} carries ${r.pots} pots but has ${info.craft.potSlots} pot slots` });
+    out.push({ rule: 'pot-slots', ...at, facts: { count: r.pots, limit: info.craft.potSlots }, message: `${name} carries ${r.pots} pots but has ${info.craft.potSlots} pot slots` });
   }
   const load = peopleKg + potKg;
   if (load > info.capKg + 1e-6) {
-    const pct = Math.round((info.capKg / info.craft.maxLoadKg) * 100);
-    out.push({ rule: 'load', ...at, message: `${name} loads ${kg(load)}, over ${pct} % of its rated ${kg(info.craft.maxLoadKg)} (${kg(info.capKg)})` });
+    const marginShare = info.capKg / info.craft.maxLoadKg;
+    const pct = Math.round(marginShare * 100);
+    const facts = { loadKg: load, limitKg: info.capKg, ratedKg: info.craft.maxLoadKg, marginShare };
+    out.push({ rule: 'load', ...at, facts, message: `${name} loads ${kg(load)}, over ${pct} % of its rated ${kg(info.craft.maxLoadKg)} (${kg(info.capKg)})` });
   }
   if (r.landAt + ctx.unloadMs > ctx.end) {
-    out.push({ rule: 'window', ...at, message: `${name} is unloaded at ${clock(r.landAt + ctx.unloadMs)}, after the window closes at ${clock(ctx.end)}` });
+    out.push({ rule: 'window', ...at, facts: { at: r.landAt + ctx.unloadMs, by: ctx.end }, message: `${name} is unloaded at ${clock(r.landAt + ctx.unloadMs)}, after the window closes at ${clock(ctx.end)}` });
   }
 }
 
 /**
  * Every rule a trip plan breaks; an empty list means the plan is valid.
  * @example validateTripPlan(instance, { runs: [{ craftId: 'canoe-1', run: 1, …, people: ['ann'], pots: 9 }] })
- * // [{ rule: 'pot-slots', craftId: 'canoe-1', run: 1, message: 'canoe-1 run 1 carries 9 pots but has 6 pot slots' }]
+ * // [{ rule: 'pot-slots', craftId: 'canoe-1', run: 1, facts: { count: 9, limit: 6 }, message: 'canoe-1 run 1 carries 9 pots but has 6 pot slots' }]
  */
 export function validateTripPlan(instance: TripInstance, plan: { runs: readonly TripRun[] }, options: TripOptions = {}): TripViolation[] {
   const ctx = buildContext(instance, options);
@@ -69,7 +74,7 @@ export function validateTripPlan(instance: TripInstance, plan: { runs: readonly 
   checkPeople(ctx, plan.runs, out);
   const total = plan.runs.reduce((n, r) => n + Math.max(0, r.pots), 0);
   if (total > instance.pots.count) {
-    out.push({ rule: 'pots-total', message: `the runs carry ${total} pots but only ${instance.pots.count} are ready` });
+    out.push({ rule: 'pots-total', facts: { count: total, limit: instance.pots.count }, message: `the runs carry ${total} pots but only ${instance.pots.count} are ready` });
   }
   return out;
 }

@@ -52,7 +52,7 @@ describe('solveTripPlan on hand-worked instances', () => {
     const instance = { ...oneCanoe(), window: { start: T0, end: at('14:00') }, pots: { count: 10, massKg: 25 } };
     const plan = await solveTripPlan(instance);
     expect(potsOf(plan)).toBe(4);
-    expect(plan.unplaced.potReasons).toEqual([{ count: 6, reason: 'window-too-short', detail: expect.stringContaining('at most 4 pots') }]);
+    expect(plan.unplaced.potReasons).toEqual([{ count: 6, reason: 'window-too-short', detail: expect.stringContaining('at most 4 pots'), refs: { at: instance.window.end } }]);
   });
 });
 
@@ -62,9 +62,9 @@ describe('what cannot be planned', () => {
     const plan = await solveTripPlan(instance);
     expect(plan.status).toBe('infeasible');
     expect(plan.runs).toEqual([]);
-    expect(plan.idleCraft).toEqual([{ craftId: 'skiff-1', reason: 'no-operator', detail: expect.stringContaining('operator skill') }]);
+    expect(plan.idleCraft).toEqual([{ craftId: 'skiff-1', reason: 'no-operator', detail: expect.stringContaining('operator skill'), refs: { craftIds: ['skiff-1'] } }]);
     expect(plan.unplaced.people.map((p) => p.reason)).toEqual(['no-operator', 'no-operator']);
-    expect(plan.unplaced.potReasons).toEqual([{ count: 14, reason: 'no-operator', detail: expect.any(String) }]);
+    expect(plan.unplaced.potReasons).toEqual([{ count: 14, reason: 'no-operator', detail: expect.any(String), refs: { craftIds: ['skiff-1'] } }]);
   });
 
   it('a window shorter than one leg is infeasible, with that reason', async () => {
@@ -102,7 +102,7 @@ describe('minors, owners and operators', () => {
   it('a minor whose guardian is not on the crew stays ashore, and says why', async () => {
     const instance = { ...base(), people: [person('ann', { skills: ['paddler'] }), person('mo', { guardianId: 'gus', weightKg: 40 })] };
     const plan = await solveTripPlan(instance);
-    expect(plan.unplaced.people).toEqual([{ id: 'mo', reason: 'guardian-not-aboard', detail: 'their guardian gus is not on the crew' }]);
+    expect(plan.unplaced.people).toEqual([{ id: 'mo', reason: 'guardian-not-aboard', detail: 'their guardian gus is not on the crew', refs: { personIds: ['gus'] } }]);
   });
 
   it("a volunteer's own kayak is paddled by its owner only, and stays ashore without them", async () => {

@@ -100,6 +100,21 @@ describe('buildTripSheet', () => {
     ]);
   });
 
+  it("reads the ids and the instant a reason lists in its refs, not guessed from the text", () => {
+    const withRefs = plan();
+    withRefs.unplaced.people = [{ id: 'zoe', reason: 'guardian-not-aboard', detail: 'their guardian ann is not going out', refs: { personIds: ['ann'] } }];
+    // The planner clocks the close at 16:00 UTC; refs give the instant: 12:00 PM EDT (UTC−4).
+    withRefs.unplaced.potReasons = [{ count: 1, reason: 'planting-time', detail: 'the crew cannot plant more before the window closes at 16:00 UTC', refs: { at: '2026-04-10T16:00:00.000Z' } }];
+    withRefs.idleCraft = [{ craftId: 'pelican', reason: 'not-needed', detail: 'pelican is not needed', refs: { craftIds: ['pelican'] } }];
+    const ashore = sectionLines(buildTripSheet(sheetInput({ plan: withRefs })), 'Not placed');
+    expect(ashore).toEqual([
+      '1 pot: Too late to plant before the window closes. The crew cannot plant more before the window closes at 12:00 PM EDT.',
+      'Zoe Park: Guardian not aboard. Their guardian Ann Ortiz is not going out.',
+      'Craft staying ashore:',
+      'Pelican: Not needed. Pelican is not needed.',
+    ]);
+  });
+
   it('prints the usual cautions and defers to local rules and the operator', () => {
     const text = allText(buildTripSheet(sheetInput()));
     expect(text).toMatch(/wearable life jacket for everyone on the water/);

@@ -23,9 +23,9 @@ const find = (runs: TripRun[], craftId: string, n: number) => runs.find((r) => r
 const cases: [string, Edit, string[]][] = [
   ['a run over its pot slots', (runs) => { find(runs, 'skiff-1', 2).pots = 7; find(runs, 'kayak-1', 1).pots = 0; }, ['pot-slots']],
   ['a kayak over its 70 % margin', (_runs, i) => { i.people[1]!.weightKg = 90; }, ['load']],
-  ['a skiff run without its operator', (runs) => { find(runs, 'skiff-1', 2).people = ['cy']; }, ['skipper']],
-  ["someone else's own kayak", (_runs, i) => { i.craft[1]!.ownerId = 'paz'; }, ['skipper']],
-  ['a kayak with no paddler aboard', (_runs, i) => { i.people[1]!.skills = []; }, ['skipper']],
+  ['a skiff run without its operator', (runs) => { find(runs, 'skiff-1', 2).people = ['cy']; }, ['operator']],
+  ["someone else's own kayak", (_runs, i) => { i.craft[1]!.ownerId = 'paz'; }, ['own-kayak']],
+  ['a kayak with no paddler aboard', (_runs, i) => { i.people[1]!.skills = []; }, ['paddler']],
   ['a person riding out in two craft', (runs) => { find(runs, 'skiff-1', 2).people = ['olive', 'pat']; }, ['travels-once']],
   ['a minor without their guardian', (_runs, i) => { i.people[3]!.guardianId = 'pat'; }, ['guardian']],
   ['more people to bring back than seats', (runs, i) => {
@@ -81,6 +81,7 @@ describe('validateTripPlan', () => {
     const violations = validateTripPlan(instance, { runs: baseline() });
     expect(violations[0]).toEqual({
       rule: 'planting-time',
+      facts: { count: 14, limit: 2, pairs: 0, at: at('13:15'), by: at('15:00') },
       message: '14 pots are unloaded from 13:15 UTC on, but the crew at the site (0 pairs then) can plant only 2 of them by 15:00 UTC',
     });
     expect(violations.every((v) => v.rule === 'planting-time')).toBe(true);

@@ -3,6 +3,7 @@ import { screen, waitFor, within } from '@testing-library/vue';
 import userEvent from '@testing-library/user-event';
 import { http, HttpResponse } from 'msw';
 import { server } from '../setup/client-setup';
+import { groupPanel } from './support/nav';
 import { buildSettings } from './support/organisation';
 import { renderApp } from './support/render-app';
 import { buildUser } from './support/users';
@@ -121,13 +122,16 @@ describe('DonationsView', () => {
     expect(cards.getByRole('link', { name: 'BST-0112' })).toBeTruthy();
   });
 
-  it('gives admins a Donations menu item before Settings, and no one else', async () => {
+  it('gives admins a Donations menu item under Giving & reports, marked while on the page', async () => {
     mockDonations([]);
+    const user = userEvent.setup();
     await renderApp('/donations', admin);
-    const nav = within(screen.getByRole('navigation', { name: 'Main' }));
-    const links = nav.getAllByRole('link').map((a) => a.textContent?.trim());
-    expect(links.slice(-3)).toEqual(['Donations', 'Settings', 'My account']);
-    expect(links).toContain('Sponsor a tree');
+    const giving = within(screen.getByRole('navigation', { name: 'Main' })).getByRole('button', { name: 'Giving & reports' });
+    expect(giving.getAttribute('aria-current')).toBe('true');
+    await user.click(giving);
+    const group = within(groupPanel(giving));
+    expect(group.getAllByRole('link').map((a) => a.textContent?.trim())).toEqual(['Sponsor a tree', 'Reports', 'Donations']);
+    expect(group.getByRole('link', { name: 'Donations' }).getAttribute('aria-current')).toBe('page');
   });
 
   it('keeps coordinators out', async () => {

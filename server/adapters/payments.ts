@@ -11,6 +11,9 @@ export type PaymentEvent = Stripe.Event;
 /** A webhook whose signature does not verify (wrong secret, altered body, too old, missing). */
 export class BadSignatureError extends Error {}
 
+/** The payments service turned a request down (e.g. the charge is refunded already); the message says why. */
+export class PaymentRefusedError extends Error {}
+
 export interface Payments {
   /** Creates a hosted checkout page; the same idempotency key gives back the same session. */
   createCheckoutSession(params: CheckoutSessionParams, idempotencyKey: string): Promise<CheckoutSession>;
@@ -18,6 +21,7 @@ export interface Payments {
   retrieveCheckoutSession(id: string): Promise<CheckoutSession | null>;
   /** The checkout session that created a payment intent, or null. */
   checkoutSessionForPaymentIntent(paymentIntentId: string): Promise<CheckoutSession | null>;
+  /** Refunds what is left of the payment; throws PaymentRefusedError when the service turns it down. */
   refundPaymentIntent(paymentIntentId: string, idempotencyKey: string): Promise<{ id: string; status: string }>;
   /** Verifies the `Stripe-Signature` header over the raw body; throws BadSignatureError. */
   verifyWebhook(rawBody: Buffer, signature: string | undefined): PaymentEvent;
@@ -51,8 +55,13 @@ export function createPayments(opts: { secretKey: string; webhookSecret: string;
       return page.data[0] ?? null;
     },
     async refundPaymentIntent(paymentIntentId, idempotencyKey) {
-      const refund = await stripe.refunds.create({ payment_intent: paymentIntentId }, { idempotencyKey });
-      return { id: refund.id, status: refund.status ?? 'pending' };
+      try {
+        const refund = await stripe.refunds.create({ payment_intent: paymentIntentId }, { idempotencyKey });
+        return { id: refund.id, status: refund.status ?? 'pending' };
+      } catch (err) {
+        if (err instanceof Stripe.errors.StripeInvalidRequestError) throw new PaymentRefusedError(err.message);
+        throw err;
+      }
     },
     verifyWebhook(rawBody, signature) {
       if (!signature) throw new BadSignatureError('The Stripe-Signature header is missing');

@@ -1,7 +1,7 @@
 /** The admin's view of donations: filtered, paged list with totals, CSV export, and refunds. */
 import { In, type DataSource, type SelectQueryBuilder } from 'typeorm';
 import type { DonationList, DonationRow, ListDonationsQuery, RefundResult } from '../../shared/schemas/donation.schema.js';
-import type { Payments } from '../adapters/payments.js';
+import { PaymentRefusedError, type Payments } from '../adapters/payments.js';
 import { Donation } from '../db/entities/donation.entity.js';
 import { Organisation } from '../db/entities/organisation.entity.js';
 import { Tree } from '../db/entities/tree.entity.js';
@@ -89,8 +89,14 @@ export function createDonationAdminService(deps: { db: DataSource; payments: Pay
       if (!d) throw new NotFoundError('Donation');
       if (d.status === 'refunded') throw new ConflictError('This donation is refunded already');
       if (!d.paymentIntentId) throw new ConflictError('This donation has no payment to refund');
-      const refund = await deps.payments.refundPaymentIntent(d.paymentIntentId, `donation-refund:${d.id}`);
-      return { refundId: refund.id, status: refund.status };
+      try {
+        const refund = await deps.payments.refundPaymentIntent(d.paymentIntentId, `donation-refund:${d.id}`);
+        return { refundId: refund.id, status: refund.status };
+      } catch (err) {
+        // E.g. refunded from the payments dashboard already; its charge.refunded webhook marks the gift.
+        if (err instanceof PaymentRefusedError) throw new ConflictError(`The payments service refused the refund: ${err.message}`);
+        throw err;
+      }
     },
   };
 }

@@ -59,6 +59,10 @@ export function createDonationWebhookService(deps: {
     return db.transaction(async (tx): Promise<WebhookOutcome> => {
       const now = clock();
       if (!(await claimEvent(tx, event, now))) return 'replayed';
+      if (partial && paymentIntent) {
+        // Partial refunds are not tracked (no column for them): the gift keeps its full amount, so leave a trace in the log.
+        log(`[giving] partial refund of ${charge.amount_refunded} of ${charge.amount} (${charge.currency}) on payment ${paymentIntent} is not recorded; the donation keeps its full amount until the charge is refunded in full`);
+      }
       if (!paymentIntent || partial) return 'ignored';
       if (session) await insertDonation(tx, session, { status: 'refunded', paidAt: new Date(charge.created * 1000), now, currency });
       const d = await tx.getRepository(Donation).findOne({ where: { paymentIntentId: paymentIntent }, lock: { mode: 'pessimistic_write' } });

@@ -20,6 +20,8 @@ import { queueMails } from './crew-outbox.js';
 import { linkTrees } from './sponsor-trees.js';
 
 const BATCH = 200;
+/** A tree that died in the nursery: lost, never planted. */
+const LOST_IN_NURSERY = "(t.stage = 'lost' AND t.planted_on IS NULL)";
 
 interface Due {
   treeId: string;
@@ -91,11 +93,16 @@ export function createSponsorNewsService(deps: { db: DataSource; stations: TideS
       return told;
     },
 
-    /** Links free nursery trees to paid gifts that have fewer than they bought, oldest gift first; returns trees linked. */
+    /**
+     * Links free nursery trees to paid gifts that have fewer than they bought, oldest gift first;
+     * returns trees linked. A sponsored tree lost before it was planted is let go first, so the
+     * gift takes the next tree instead of holding a dead one for good.
+     */
     async matchWaitingGifts(): Promise<number> {
       const waiting: { id: string }[] = await db.query(
         `SELECT d.id FROM donation d
-          WHERE d.status = 'paid' AND d.tree_count > (SELECT COUNT(*) FROM tree t WHERE t.sponsor_donation_id = d.id)
+          WHERE d.status = 'paid'
+            AND d.tree_count > (SELECT COUNT(*) FROM tree t WHERE t.sponsor_donation_id = d.id AND NOT ${LOST_IN_NURSERY})
           ORDER BY d.paid_at, d.id LIMIT $1`,
         [BATCH],
       );
@@ -104,6 +111,7 @@ export function createSponsorNewsService(deps: { db: DataSource; stations: TideS
         const got = await db.transaction(async (tx) => {
           const d = await tx.getRepository(Donation).findOne({ where: { id }, lock: { mode: 'pessimistic_write' } });
           if (!d || d.status !== 'paid') return null; // refunded meanwhile
+          await tx.query(`UPDATE tree t SET sponsor_donation_id = NULL WHERE t.sponsor_donation_id = $1 AND ${LOST_IN_NURSERY}`, [id]);
           const have = await tx.getRepository(Tree).countBy({ sponsorDonationId: id });
           return (await linkTrees(tx, id, d.treeCount - have)).length;
         });

@@ -61,7 +61,7 @@ export const HoursReport = z.object({
   period: ReportPeriod,
   currency: z.string(),
   rows: z.array(HoursRowDto),
-  /** valueCents here is from the total minutes, rounded once; rows are rounded each. */
+  /** valueCents here is from the total minutes, rounded once; the rows' values share it and add up to it. */
   totals: z.object({ volunteers: z.number(), minutes: z.number(), hours: z.number(), valueCents: z.number() }),
 });
 export type HoursReport = z.infer<typeof HoursReport>;

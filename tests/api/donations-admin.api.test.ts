@@ -7,7 +7,7 @@ import { buildCampaign, buildDonation } from '../factories/donation.factory.js';
 import { buildTree } from '../factories/tree.factory.js';
 import { uniqueEmail } from '../factories/user.factory.js';
 import { authAgentFor, createTestApp, type TestApp } from '../setup/test-app.js';
-import { CARDS, deliver, fakeEvents, payInFake } from './donations-helpers.js';
+import { CARDS, deliver, fakeEvents, payInFake, sdkFor } from './donations-helpers.js';
 
 // Its own database: the list and its totals cover every donation there is.
 let t: TestApp;
@@ -125,6 +125,22 @@ describe('POST /api/donations/:id/refund', () => {
 
     const again = await admin.agent.post(`/api/donations/${gift.id}/refund`).set('X-CSRF-Token', admin.token);
     expect(again.status).toBe(409);
+  });
+
+  it('answers 409 with the reason when the payments service refuses, e.g. refunded from its dashboard already', async () => {
+    await buildTree(t.db, { stage: 'ready' });
+    const checkout = await request(t.app).post('/api/donations/checkout').send({ campaignId: b.id, trees: 1, coverFees: false, donor: { name: 'Dee Dashboard', email: uniqueEmail('dash') } }).expect(201);
+    const sessionId = checkout.body.sessionId as string;
+    expect((await payInFake(t.config, sessionId, CARDS.paid)).status).toBe(200);
+    const completed = (await fakeEvents(t.config, 'checkout.session.completed')).find((e) => e.data.object.id === sessionId);
+    await deliver(t.app, JSON.stringify(completed), t.config.STRIPE_WEBHOOK_SECRET).expect(200);
+    const gift = await t.db.getRepository(Donation).findOneByOrFail({ checkoutSessionId: sessionId });
+    // Refunded outside the app; its webhook has not landed yet, so the gift still reads paid.
+    await sdkFor(t.config).refunds.create({ payment_intent: gift.paymentIntentId! });
+
+    const res = await admin.agent.post(`/api/donations/${gift.id}/refund`).set('X-CSRF-Token', admin.token);
+    expect(res.status).toBe(409);
+    expect(res.body.error).toMatchObject({ code: 'conflict', message: expect.stringContaining('already been refunded') });
   });
 
   it('answers 404 for an unknown donation and 409 when there is no payment to refund', async () => {

@@ -180,4 +180,17 @@ describe('POST /api/donations/checkout: rate limit', () => {
     expect(body.error?.code).toBe('rate_limited');
     expect(sent).toBeLessThanOrEqual(101);
   });
+
+  it('allows 300 thank-you look-ups in 15 minutes from one address, then answers 429', async () => {
+    // Unknown sessions are looked up at the payments service; made-up ids must not flood it.
+    let status = 0;
+    let sent = 0;
+    while (sent < 320 && status !== 429) {
+      status = (await request(t.app).get('/api/donations/thanks/nope')).status;
+      sent += 1;
+    }
+    expect(status).toBe(429);
+    expect(sent).toBeGreaterThan(290);
+    expect(sent).toBeLessThanOrEqual(301);
+  });
 });

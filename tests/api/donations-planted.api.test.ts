@@ -75,3 +75,20 @@ describe('sponsor news: "your tree is planted"', () => {
     });
   });
 });
+
+describe('sponsor news: gifts waiting for trees', () => {
+  it('gives a gift whose tree died in the nursery the next free tree; a tree lost after planting stays the donor\'s', async () => {
+    // Oldest first, so this gift is matched before any other waiting one.
+    const gift = await buildDonation(t.db, { treeCount: 2, paidAt: new Date('2000-01-02T12:00:00Z') });
+    const diedInNursery = await buildTree(t.db, { stage: 'lost', sponsorDonationId: gift.id });
+    const site = await buildSite(t.db, { name: `Lost test shore ${Date.now()}` });
+    const lostAfterPlanting = await buildTree(t.db, { stage: 'lost', siteId: site.id, plantedOn: '2016-01-01', sponsorDonationId: gift.id });
+    const free = await buildTree(t.db, { stage: 'ready' });
+
+    await t.background.runSponsorNews();
+    const sponsorOf = async (id: string) => (await t.db.getRepository(Tree).findOneByOrFail({ id })).sponsorDonationId;
+    expect(await sponsorOf(free.id)).toBe(gift.id);
+    expect(await sponsorOf(diedInNursery.id)).toBeNull();
+    expect(await sponsorOf(lostAfterPlanting.id)).toBe(gift.id);
+  });
+});

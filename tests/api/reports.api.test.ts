@@ -44,6 +44,7 @@ describe('GET /api/reports/summary', () => {
     expect(total(hours.rows.map((r) => r.minutes))).toBe(summary.volunteerMinutes);
     expect(new Set(hours.rows.map((r) => r.userId)).size).toBe(summary.volunteers);
     expect(hours.totals).toEqual({ volunteers: 2, minutes: 690, hours: 11.5, valueCents: summary.volunteerValueCents });
+    expect(total(hours.rows.map((r) => r.valueCents))).toBe(summary.volunteerValueCents);
     expect(total(trees.rows.map((r) => r.planted))).toBe(summary.treesPlanted);
     expect(total(trees.rows.map((r) => r.alive))).toBe(summary.treesAlive);
     expect(total(gifts.rows.map((r) => r.amountCents))).toBe(summary.donationsCents);

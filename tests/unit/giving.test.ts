@@ -1,9 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { checkoutLines, giftLineName } from '../../server/domain/giving/checkout-lines.js';
 import { giftMetadata, readGiftMetadata, recordedAmounts, type GiftDetails } from '../../server/domain/giving/checkout-metadata.js';
+import { donationsCsv } from '../../server/domain/giving/donations-csv.js';
 import { decimalAmount, formatMoney } from '../../server/domain/giving/money.js';
 import { tideLine } from '../../server/domain/giving/planted-mail.js';
 import { NO_GOODS_OR_SERVICES, receiptMail, type ReceiptDonation } from '../../server/domain/giving/receipt-mail.js';
+import type { DonationRow } from '../../shared/schemas/donation.schema.js';
 
 const gift: GiftDetails = {
   campaignId: '0b7e4f5e-1111-4111-8111-111111111111', treeCount: 2, giftCents: 5000, feeCoverCents: 181, donorName: 'Ana Lima', donorEmail: 'ana@example.com',
@@ -92,6 +94,26 @@ describe('receipt mail', () => {
     const mail = receiptMail({ ...donation, treeTags: [] }, { name: 'Bay Org', legalName: '', taxId: '', timeZone: 'UTC' }, link);
     expect(mail.text).toContain('None of your 2 trees is matched to a nursery tree yet');
     expect(mail.text).toContain('Trees sponsored: 2 trees, to be matched');
+  });
+});
+
+describe('donations CSV', () => {
+  const row: DonationRow = {
+    id: 'd-1', amountCents: 5181, giftCents: 5000, feeCoverCents: 181, currency: 'usd', status: 'paid', checkoutSessionId: 'cs_1',
+    donor: { name: 'Ana Lima', email: 'ana@example.com' }, treeCount: 0, trees: [], campaign: null, dedication: null, wallName: null,
+    wantsUpdates: false, paidAt: '2026-03-14T15:00:00.000Z', refundedAt: null, createdAt: '2026-03-14T15:00:00.000Z',
+  };
+  const cells = (donor: DonationRow['donor']) => donationsCsv([{ ...row, donor }]).split('\r\n')[1]!;
+
+  it.each([
+    // Donor-typed text that a spreadsheet would run as a formula (OWASP, "CSV Injection": = + - @ tab CR).
+    [{ name: '=HYPERLINK("http://x")', email: 'a@example.com' }, `"'=HYPERLINK(""http://x"")"`],
+    [{ name: 'Ana', email: '+1@example.com' }, "'+1@example.com"],
+    [{ name: '@SUM(A1)', email: 'a@example.com' }, "'@SUM(A1)"],
+    [{ name: '\t=1+1', email: 'a@example.com' }, "'\t=1+1"],
+    [{ name: '\r=1+1', email: 'a@example.com' }, `"'\r=1+1"`],
+  ])('neutralises a leading formula character in %j', (donor, cell) => {
+    expect(cells(donor)).toContain(`,${cell},`);
   });
 });
 

@@ -61,12 +61,19 @@ function cohortDue(group: readonly MonitoredTree[], checks: ReadonlyMap<string, 
  */
 export function monitoringDue(trees: readonly MonitoredTree[], checks: readonly CheckRecord[], today: string, toleranceDays = DEFAULT_TOLERANCE_DAYS): DueCohort[] {
   const checksOf = new Map<string, CheckRecord[]>();
-  for (const c of [...checks].sort((a, b) => (a.visitedOn < b.visitedOn ? -1 : 1))) checksOf.set(c.treeId, [...(checksOf.get(c.treeId) ?? []), c]);
+  // push, not spread: copying a list on every item is quadratic at thousands of trees.
+  for (const c of [...checks].sort((a, b) => (a.visitedOn < b.visitedOn ? -1 : 1))) {
+    const own = checksOf.get(c.treeId);
+    if (own) own.push(c);
+    else checksOf.set(c.treeId, [c]);
+  }
   const groups = new Map<string, MonitoredTree[]>();
   for (const t of trees) {
     if (t.plantedOn > today) continue;
     const key = `${t.siteId}|${t.plantedOn}`;
-    groups.set(key, [...(groups.get(key) ?? []), t]);
+    const group = groups.get(key);
+    if (group) group.push(t);
+    else groups.set(key, [t]);
   }
   const due = [...groups.values()].flatMap((g) => cohortDue(g, checksOf, today, toleranceDays) ?? []);
   return due.sort((a, b) => (a.status !== b.status ? (a.status === 'overdue' ? -1 : 1) : a.dueOn < b.dueOn ? -1 : a.dueOn > b.dueOn ? 1 : 0));

@@ -65,6 +65,25 @@ export function volunteerValueCents(minutes: number, hourValueCents: number): nu
   return Math.floor((2 * minutes * hourValueCents + 60) / 120);
 }
 
+/**
+ * Splits the value of the summed minutes, rounded once, among rows: each row gets its own value
+ * rounded down or up (largest remainder first, ties in row order), so the rows add up to the total
+ * to the cent — a table of per-row roundings would drift from the total by up to half a cent a row.
+ * @example shareValueCents([1, 1, 1, 1, 1, 1], 3190) // [54, 53, 53, 53, 53, 53] (total 319)
+ */
+export function shareValueCents(minutesPerRow: readonly number[], hourValueCents: number): number[] {
+  const exact = minutesPerRow.map((m) => m * hourValueCents); // sixtieths of a cent
+  const floors = exact.map((x) => Math.floor(x / 60));
+  let left = volunteerValueCents(sum(minutesPerRow), hourValueCents) - sum(floors);
+  const byRemainder = exact.map((x, i) => ({ i, rest: x % 60 })).sort((a, b) => b.rest - a.rest || a.i - b.i);
+  for (const { i } of byRemainder) {
+    if (left <= 0) break;
+    floors[i]! += 1;
+    left -= 1;
+  }
+  return floors;
+}
+
 /** The period a date falls in: `2026-03`, `2026-Q1` or `2026`. */
 export function periodOf(day: string, period: Period): string {
   if (period === 'year') return day.slice(0, 4);
@@ -126,7 +145,10 @@ export interface HoursRow {
   valueCents: number;
 }
 
-/** Hours per person and period (people with attended minutes only), by period then name. */
+/**
+ * Hours per person and period (people with attended minutes only), by period then name. Row
+ * values share the rounded total (`shareValueCents`), so they add up to the summary's value.
+ */
 export function hoursTable(attendance: readonly AttendanceRecord[], r: ReportRange, period: Period, hourValueCents: number): HoursRow[] {
   const rows = new Map<string, HoursRow>();
   for (const a of attended(attendance, r)) {
@@ -137,9 +159,9 @@ export function hoursTable(attendance: readonly AttendanceRecord[], r: ReportRan
     row.minutes += a.minutes;
     rows.set(key, row);
   }
-  return [...rows.values()]
-    .map((row) => ({ ...row, hours: hoursFromMinutes(row.minutes), valueCents: volunteerValueCents(row.minutes, hourValueCents) }))
-    .sort((a, b) => cmp(a.period, b.period) || cmp(a.name, b.name) || cmp(a.userId, b.userId));
+  const sorted = [...rows.values()].sort((a, b) => cmp(a.period, b.period) || cmp(a.name, b.name) || cmp(a.userId, b.userId));
+  const values = shareValueCents(sorted.map((row) => row.minutes), hourValueCents);
+  return sorted.map((row, i) => ({ ...row, hours: hoursFromMinutes(row.minutes), valueCents: values[i]! }));
 }
 
 export interface TreesRow {

@@ -19,7 +19,7 @@
  *   `reached` and, per site, `reachedShare` (= reached / planted) show how much of the planting
  *   the rate speaks for.
  */
-import { DEFAULT_TOLERANCE_DAYS, milestoneMonths, milestoneWindow, monthOf, monthsBetween } from './milestones.js';
+import { DEFAULT_TOLERANCE_DAYS, milestoneMonths, milestoneWindow, monthOf, monthsBetween, type MilestoneWindow } from './milestones.js';
 
 export type Condition = 'alive' | 'lost' | 'missing';
 
@@ -70,8 +70,10 @@ type Outcome = 'not-reached' | 'unchecked' | 'alive' | 'not-alive';
 const rate = (num: number, den: number) => (den === 0 ? null : Math.round((num / den) * 10_000) / 10_000);
 
 /** One tree's outcome at one milestone, from its checks sorted by date. */
-export function outcomeAt(tree: PlantedTree, checks: readonly CheckRecord[], months: number, asOf: string, toleranceDays: number): Outcome {
-  const w = milestoneWindow(tree.plantedOn, months, toleranceDays);
+export function outcomeAt(
+  tree: PlantedTree, checks: readonly CheckRecord[], months: number, asOf: string, toleranceDays: number,
+  w: MilestoneWindow = milestoneWindow(tree.plantedOn, months, toleranceDays),
+): Outcome {
   if (w.opensOn > asOf) return 'not-reached';
   const usable = checks.filter((c) => c.visitedOn <= asOf);
   const counted = usable.find((c) => c.visitedOn >= w.opensOn && c.visitedOn < w.closesBefore);
@@ -91,7 +93,10 @@ const byKey = <T>(items: readonly T[], key: (t: T) => string) => {
   const groups = new Map<string, T[]>();
   for (const item of items) {
     const k = key(item);
-    groups.set(k, [...(groups.get(k) ?? []), item]);
+    // push, not spread: copying the group on every item is quadratic in the group's size.
+    const group = groups.get(k);
+    if (group) group.push(item);
+    else groups.set(k, [item]);
   }
   return [...groups.entries()].sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0));
 };
@@ -106,13 +111,23 @@ export function survivalTable(trees: readonly PlantedTree[], checks: readonly Ch
   const planted = trees.filter((t) => t.plantedOn <= opts.asOf);
   const checksOf = new Map<string, CheckRecord[]>();
   for (const c of [...checks].sort((a, b) => (a.visitedOn < b.visitedOn ? -1 : a.visitedOn > b.visitedOn ? 1 : 0))) {
-    checksOf.set(c.treeId, [...(checksOf.get(c.treeId) ?? []), c]);
+    const own = checksOf.get(c.treeId);
+    if (own) own.push(c);
+    else checksOf.set(c.treeId, [c]);
   }
   const earliest = planted.reduce<string | null>((min, t) => (min === null || t.plantedOn < min ? t.plantedOn : min), null);
   // A yearly milestone is listed once its window has opened for the earliest tree.
   const milestones = milestoneMonths(earliest ? monthsBetween(earliest, opts.asOf) + 1 : 0)
     .filter((m, i) => i < 4 || (earliest !== null && milestoneWindow(earliest, m, toleranceDays).opensOn <= opts.asOf));
-  const outcomes = new Map(planted.map((t) => [t.id, milestones.map((m) => outcomeAt(t, checksOf.get(t.id) ?? [], m, opts.asOf, toleranceDays))]));
+  // Trees share a handful of planting dates; the date arithmetic of a window is the costly part.
+  const windows = new Map<string, MilestoneWindow>();
+  const windowOf = (plantedOn: string, m: number) => {
+    const key = `${plantedOn}|${m}`;
+    let w = windows.get(key);
+    if (!w) windows.set(key, (w = milestoneWindow(plantedOn, m, toleranceDays)));
+    return w;
+  };
+  const outcomes = new Map(planted.map((t) => [t.id, milestones.map((m) => outcomeAt(t, checksOf.get(t.id) ?? [], m, opts.asOf, toleranceDays, windowOf(t.plantedOn, m)))]));
   const cellsFor = (group: readonly PlantedTree[]) => milestones.map((m, i) => cell(m, group.map((t) => outcomes.get(t.id)![i]!)));
 
   const cohorts = byKey(planted, (t) => `${t.siteId}|${monthOf(t.plantedOn)}`).map(([key, group]) => ({

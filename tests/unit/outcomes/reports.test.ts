@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { donationsTable, hoursTable, periodOf, summaryFigures, treesTable, volunteerValueCents, type AttendanceRecord, type DonationRecord, type PlantingRecord } from '../../../server/domain/outcomes/reports.js';
+import { donationsTable, hoursTable, periodOf, shareValueCents, summaryFigures, treesTable, volunteerValueCents, type AttendanceRecord, type DonationRecord, type PlantingRecord } from '../../../server/domain/outcomes/reports.js';
 import { formatMoney } from '../../../server/domain/outcomes/report-format.js';
 
 describe('volunteerValueCents', () => {
@@ -80,6 +80,21 @@ describe('report tables', () => {
       { period: '2026-04', userId: 'u1', name: 'Person u1', workdays: 1, minutes: 180, hours: 3, valueCents: 9540 },
     ]);
     expect(hoursTable(attendance, range, 'quarter', 3180).map((r) => [r.period, r.name, r.minutes])).toEqual([['2026-Q1', 'Person u1', 270], ['2026-Q1', 'Person u2', 240], ['2026-Q2', 'Person u1', 180]]);
+  });
+
+  it('gives hour values that add up to the summary value to the cent', () => {
+    // Six people, 1 minute each at $31.90 an hour: 53.17 cents each, 319 cents in all (rounded
+    // once). Rounding each row alone gives 6 × 53 = 318; the rows share the 319 instead.
+    const six = ['a', 'b', 'c', 'd', 'e', 'f'].map((u) => att(u, '2026-03-14', 1));
+    const rows = hoursTable(six, range, 'month', 3190);
+    const summary = summaryFigures({ attendance: six, plantings: [], donations: [] }, range, 3190);
+    expect(summary.volunteerValueCents).toBe(319);
+    expect(rows.reduce((a, r) => a + r.valueCents, 0)).toBe(319);
+    expect(rows.map((r) => r.valueCents)).toEqual([54, 53, 53, 53, 53, 53]);
+    // Largest remainder first: 100 min at $0.31 = 51.67 cents, 50 min = 25.83, 1 min = 0.52; total 78.02 → 78.
+    expect(shareValueCents([100, 50, 1], 31)).toEqual([52, 26, 0]);
+    expect(shareValueCents([270, 270], 3180)).toEqual([14_310, 14_310]);
+    expect(shareValueCents([], 3180)).toEqual([]);
   });
 
   it('gives trees per site and month with nursery rows only when no site is asked for', () => {

@@ -1,5 +1,6 @@
 import { Router, type Request } from 'express';
 import { SignupBody } from '../../shared/schemas/crew.schema.js';
+import { RecentSignupsQuery } from '../../shared/schemas/recent-signups.schema.js';
 import { CheckInBody, HoursBody, SignupIdParams } from '../../shared/schemas/roster.schema.js';
 import { WorkdayIdParams } from '../../shared/schemas/workday.schema.js';
 import { currentUser, requireAuth, requireRole } from '../middleware/auth.js';
@@ -42,6 +43,9 @@ export function crewRouter(deps: { signups: SignupService; roster: RosterService
       return;
     }
     res.json({ roster: rows });
+  });
+  r.get('/signups/recent', staff, async (req, res) => {
+    res.json({ signups: await deps.roster.recent(RecentSignupsQuery.parse(req.query).limit) });
   });
   r.post('/signups/:id/check-in', staff, async (req, res) => {
     await deps.attendance.checkIn(currentUser(req).id, signupId(req), CheckInBody.parse(req.body ?? {}).at);

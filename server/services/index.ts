@@ -71,7 +71,7 @@ export function createServices(deps: ServiceDeps) {
     siteTide: createSiteTideService({ sites, stations, organisation }),
     workdays: createWorkdayService({ db, sites, notifier, clock }),
     signups: createSignupService({ db, sites, waivers, notifier, clock }),
-    roster: createRosterService({ db }),
+    roster: createRosterService({ db, clock }),
     attendance: createAttendanceService({ db, clock }),
     me: createMeService({ db }),
     calendar: createCalendarService({ db, appUrl: config.APP_URL, clock }),

@@ -1,6 +1,8 @@
 import type { DataSource } from 'typeorm';
+import type { MyHours } from '../../shared/schemas/my-hours.schema.js';
 import type { Profile, UpdateProfileBody } from '../../shared/schemas/profile.schema.js';
 import { Signup } from '../db/entities/signup.entity.js';
+import { Tree } from '../db/entities/tree.entity.js';
 import { VolunteerProfile } from '../db/entities/volunteer-profile.entity.js';
 import { Workday } from '../db/entities/workday.entity.js';
 import { hoursFromMinutes, minutesWorked } from '../domain/crew/hours.js';
@@ -18,6 +20,17 @@ const toProfile = (p: VolunteerProfile | null): Profile => ({
 /** A volunteer's own profile, workdays and hours. */
 export function createMeService(deps: { db: DataSource }) {
   const profiles = deps.db.getRepository(VolunteerProfile);
+
+  /** Trees each workday recorded as planted (an undone record no longer counts), by workday id. */
+  async function plantedBy(workdayIds: string[]): Promise<Map<string, number>> {
+    if (workdayIds.length === 0) return new Map();
+    const counts = await deps.db.getRepository(Tree).createQueryBuilder('t')
+      .select('t.planted_workday_id', 'workdayId').addSelect('COUNT(*)::int', 'trees')
+      .where('t.planted_workday_id IN (:...workdayIds)', { workdayIds })
+      .groupBy('t.planted_workday_id')
+      .getRawMany<{ workdayId: string; trees: number }>();
+    return new Map(counts.map((c) => [c.workdayId, c.trees]));
+  }
   return {
     profile: async (userId: string) => toProfile(await profiles.findOneBy({ userId })),
 
@@ -40,7 +53,7 @@ export function createMeService(deps: { db: DataSource }) {
     },
 
     /** Hours per workday attended, and totals, optionally within a period. */
-    async hours(userId: string, period: { from?: string; to?: string }) {
+    async hours(userId: string, period: { from?: string; to?: string }): Promise<MyHours> {
       const qb = deps.db.getRepository(Signup).createQueryBuilder('s')
         .innerJoinAndMapOne('s.workday', Workday, 'w', 'w.id = s.workday_id')
         .where('s.user_id = :userId AND s.status = :st', { userId, st: 'confirmed' })
@@ -48,11 +61,15 @@ export function createMeService(deps: { db: DataSource }) {
         .orderBy('w.starts_at', 'DESC');
       if (period.from) qb.andWhere('w.starts_at >= :from', { from: new Date(period.from) });
       if (period.to) qb.andWhere('w.starts_at < :to', { to: new Date(period.to) });
-      const rows = (await qb.getMany()).map((s) => ({
+      const signups = await qb.getMany();
+      const planted = await plantedBy(signups.filter((s) => s.checkedInAt !== null && !s.noShow && s.workday.kind === 'planting').map((s) => s.workdayId));
+      const rows = signups.map((s) => ({
         workdayId: s.workdayId, title: s.workday.title, startsAt: s.workday.startsAt.toISOString(), role: s.role, minutes: minutesWorked(s), noShow: s.noShow,
+        crewTreesPlanted: planted.get(s.workdayId) ?? 0,
       }));
       const minutes = rows.reduce((sum, r) => sum + r.minutes, 0);
-      return { rows, totalMinutes: minutes, totalHours: hoursFromMinutes(minutes), workdaysAttended: rows.filter((r) => r.minutes > 0).length };
+      const crewTreesPlanted = rows.reduce((sum, r) => sum + r.crewTreesPlanted, 0);
+      return { rows, totalMinutes: minutes, totalHours: hoursFromMinutes(minutes), workdaysAttended: rows.filter((r) => r.minutes > 0).length, crewTreesPlanted };
     },
   };
 }

@@ -1,4 +1,4 @@
-import { type DataSource, type EntityManager } from 'typeorm';
+import { In, type DataSource, type EntityManager } from 'typeorm';
 import type { PlantingList, PlantingResult, RecordPlantingsBody } from '../../shared/schemas/outcomes.schema.js';
 import { Site } from '../db/entities/site.entity.js';
 import { TreeCheck } from '../db/entities/tree-check.entity.js';
@@ -23,13 +23,17 @@ export function createPlantingService(deps: { db: DataSource; clock: () => Date 
 
   async function listFor(tx: EntityManager, w: Workday, site: Site): Promise<PlantingList> {
     const trees = await tx.getRepository(Tree).find({ where: [{ reservedWorkdayId: w.id }, { plantedWorkdayId: w.id }], order: { tag: 'ASC' } });
+    // Trees monitoring has checked cannot be undone (see `undo`), so the screen hides their Undo.
+    const plantedIds = trees.filter((t) => t.plantedWorkdayId === w.id).map((t) => t.id);
+    const checks = plantedIds.length ? await tx.getRepository(TreeCheck).find({ select: { treeId: true }, where: { treeId: In(plantedIds) } }) : [];
+    const checked = new Set(checks.map((c) => c.treeId));
     return {
       workday: { id: w.id, title: w.title, status: w.status, kind: w.kind, localDate: localDate(w.startsAt.getTime(), site.timeZone) },
       site: { id: site.id, name: site.name, bedElevationM: site.bedElevationM, stationId: site.stationId },
       trees: trees.map((t) => ({
         id: t.id, tag: t.tag, stage: t.stage, heightCm: t.heightCm,
         reserved: t.reservedWorkdayId === w.id, planted: t.plantedWorkdayId === w.id,
-        plantedOn: t.plantedOn, plantedBedElevationM: t.plantedBedElevationM, suggestedBedElevationM: site.bedElevationM,
+        plantedOn: t.plantedOn, plantedBedElevationM: t.plantedBedElevationM, suggestedBedElevationM: site.bedElevationM, hasChecks: checked.has(t.id),
       })),
     };
   }
@@ -71,8 +75,16 @@ export function createPlantingService(deps: { db: DataSource; clock: () => Date 
         const elevation = new Map(body.trees.map((t) => [t.treeId, t.bedElevationM ?? site.bedElevationM]));
         const at = deps.clock();
         const toPlant = trees.filter((t) => decisions.get(t.id)?.kind === 'plant');
+        // One UPDATE per bed elevation (usually just the site's), not one per tree: a day may plant hundreds.
+        const byElevation = new Map<number, string[]>();
         for (const t of toPlant) {
-          await tx.getRepository(Tree).update({ id: t.id }, { stage: 'planted', siteId: site.id, plantedOn, plantedBedElevationM: elevation.get(t.id)!, plantedWorkdayId: w.id, tankId: null });
+          const bed = elevation.get(t.id)!;
+          const ids = byElevation.get(bed);
+          if (ids) ids.push(t.id);
+          else byElevation.set(bed, [t.id]);
+        }
+        for (const [bed, ids] of byElevation) {
+          await tx.getRepository(Tree).update({ id: In(ids) }, { stage: 'planted', siteId: site.id, plantedOn, plantedBedElevationM: bed, plantedWorkdayId: w.id, tankId: null });
         }
         const note = `Planted at ${site.name} on ${plantedOn} ("${w.title}")`;
         // The stage event keeps the tank the tree left, so an undo can put it back.

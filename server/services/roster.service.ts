@@ -1,14 +1,16 @@
 import type { DataSource } from 'typeorm';
+import type { RecentSignup } from '../../shared/schemas/recent-signups.schema.js';
 import type { RosterRow } from '../../shared/schemas/roster.schema.js';
 import { Signup } from '../db/entities/signup.entity.js';
 import { User } from '../db/entities/user.entity.js';
 import { VolunteerProfile } from '../db/entities/volunteer-profile.entity.js';
+import { Workday } from '../db/entities/workday.entity.js';
 import { minutesWorked } from '../domain/crew/hours.js';
 
 const iso = (d: Date | null) => (d ? d.toISOString() : null);
 
 /** Roster rows of a workday: confirmed by role and name, then the waitlist in line order. */
-export function createRosterService(deps: { db: DataSource }) {
+export function createRosterService(deps: { db: DataSource; clock: () => Date }) {
   return {
     async roster(workdayId: string): Promise<RosterRow[]> {
       const rows = await deps.db
@@ -48,6 +50,28 @@ export function createRosterService(deps: { db: DataSource }) {
     async crew(workdayId: string) {
       const rows = await deps.db.getRepository(Signup).find({ where: { workdayId, status: 'confirmed' }, relations: { user: true }, order: { queuedAt: 'ASC' } });
       return rows.map((s) => ({ firstName: s.user.name.split(/\s+/)[0] ?? '', role: s.role }));
+    },
+
+    /**
+     * The latest sign-ups and cancellations on published workdays that haven't ended, newest
+     * first: each place counts once, at its cancellation if cancelled, else when it was taken.
+     */
+    async recent(limit: number): Promise<RecentSignup[]> {
+      const rows = await deps.db
+        .getRepository(Signup)
+        .createQueryBuilder('s')
+        .innerJoinAndMapOne('s.user', User, 'u', 'u.id = s.user_id')
+        .innerJoinAndMapOne('s.workday', Workday, 'w', 'w.id = s.workday_id')
+        .where("w.status = 'published' AND w.ends_at > :now", { now: deps.clock() })
+        .orderBy('COALESCE(s.cancelled_at, s.created_at)', 'DESC')
+        .addOrderBy('s.queued_at', 'DESC')
+        .addOrderBy('s.id', 'ASC')
+        .limit(limit)
+        .getMany();
+      return rows.map((s) => ({
+        signupId: s.id, name: s.user.name, role: s.role, status: s.status, at: (s.cancelledAt ?? s.createdAt).toISOString(),
+        workday: { id: s.workday.id, title: s.workday.title, startsAt: s.workday.startsAt.toISOString() },
+      }));
     },
   };
 }

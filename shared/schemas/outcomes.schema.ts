@@ -47,6 +47,8 @@ export const PlantingTree = z.object({
   plantedBedElevationM: nil(z.number()),
   /** The site's bed elevation: what the form should offer. */
   suggestedBedElevationM: z.number(),
+  /** Monitoring has checked the tree, so its planting record can no longer be undone. */
+  hasChecks: z.boolean(),
 });
 export type PlantingTree = z.infer<typeof PlantingTree>;
 

@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { CrewRole } from '@shared/schemas/crew.schema';
+import { MyHours } from '@shared/schemas/my-hours.schema';
 import { Profile } from '@shared/schemas/profile.schema';
 import { WorkdayDto } from '@shared/schemas/workday.schema';
 import { get, queryString } from './http';
@@ -16,23 +17,7 @@ export const MyWorkday = z.object({
 });
 export type MyWorkday = z.infer<typeof MyWorkday>;
 
-export const HoursRow = z.object({
-  workdayId: z.string(),
-  title: z.string(),
-  startsAt: z.string(),
-  role: CrewRole,
-  minutes: z.number(),
-  noShow: z.boolean(),
-});
-export type HoursRow = z.infer<typeof HoursRow>;
-
-export const MyHours = z.object({
-  rows: z.array(HoursRow),
-  totalMinutes: z.number(),
-  totalHours: z.number(),
-  workdaysAttended: z.number(),
-});
-export type MyHours = z.infer<typeof MyHours>;
+export { HoursRow, MyHours } from '@shared/schemas/my-hours.schema';
 
 const ProfileResponse = z.object({ profile: Profile });
 const MyWorkdaysResponse = z.object({ workdays: z.array(MyWorkday) });

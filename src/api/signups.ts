@@ -1,7 +1,8 @@
 import { z } from 'zod';
 import { SignupResult, type SignupBody } from '@shared/schemas/crew.schema';
+import { RecentSignups, type RecentSignup } from '@shared/schemas/recent-signups.schema';
 import { CrewMember } from '@shared/schemas/roster.schema';
-import { ApiError, del, get, post } from './http';
+import { ApiError, del, get, post, queryString } from './http';
 
 /** The waiver a volunteer accepts when signing up; a new text is a new version. */
 export const Waiver = z.object({ version: z.number(), text: z.string(), guardianText: z.string(), createdAt: z.string() });
@@ -50,4 +51,9 @@ export async function cancelMySignup(workdayId: string): Promise<void> {
 /** Signed in: the confirmed crew's first names and roles (no contact details). */
 export async function fetchCrew(workdayId: string): Promise<CrewMate[]> {
   return (await get(`/api/workdays/${encodeURIComponent(workdayId)}/crew`, CrewResponse)).crew;
+}
+
+/** Coordinators and admins: the latest sign-ups and cancellations on upcoming workdays, newest first. */
+export async function fetchRecentSignups(limit: number): Promise<RecentSignup[]> {
+  return (await get(`/api/signups/recent${queryString({ limit: String(limit) })}`, RecentSignups)).signups;
 }

@@ -1,10 +1,10 @@
 import { computed, ref, type ComputedRef, type Ref } from 'vue';
 import type { NurseryTasksDto } from '@shared/schemas/nursery.schema';
-import type { RosterRow } from '@shared/schemas/roster.schema';
+import type { RecentSignup } from '@shared/schemas/recent-signups.schema';
 import type { WorkdayDto } from '@shared/schemas/workday.schema';
 import { listOpenCampaigns, type Campaign } from '@/api/campaigns';
 import { fetchMonitoringDue, type MonitoringDueDto } from '@/api/monitoring';
-import { fetchRoster } from '@/api/roster';
+import { fetchRecentSignups } from '@/api/signups';
 import { listSites } from '@/api/sites';
 import { fetchNurseryTasks } from '@/api/tanks';
 import { fetchSiteReadiness } from '@/api/trees';
@@ -14,7 +14,7 @@ import { localDateKey, zonedTime } from '@/utils/zoned-time';
 import { useAsyncAction } from './useAsyncAction';
 
 const UPCOMING_SHOWN = 5;
-const SIGNUPS_SHOWN = 5;
+const SIGNUPS_SHOWN = 6;
 
 export interface CoordinatorHome {
   loading: Ref<boolean>;
@@ -25,8 +25,8 @@ export interface CoordinatorHome {
   next: ComputedRef<WorkdayDto | null>;
   upcoming: ComputedRef<WorkdayDto[]>;
   drafts: ComputedRef<WorkdayDto[]>;
-  /** The next workday's most recent sign-ups, newest first; empty when its roster couldn't be read. */
-  latestSignups: Ref<RosterRow[]>;
+  /** The latest sign-ups and cancellations on upcoming workdays, newest first; empty when they couldn't be read. */
+  latestSignups: Ref<RecentSignup[]>;
   /** The rest of the dashboard; each part is null until loaded, or 'error' when it couldn't be. */
   extras: HomeExtras;
 }
@@ -61,11 +61,11 @@ async function readyBySite(): Promise<SiteReadyCount[]> {
   return judged.map((r) => ({ siteId: r.site.id, siteName: r.site.name, ready: r.trees.filter((t) => t.ready).length, judged: r.trees.length }));
 }
 
-/** "At the water": workdays from today on, drafts included, and who joined the next one lately. */
+/** "At the water": workdays from today on, drafts included, and who joined or dropped out lately. */
 export function useCoordinatorHome(now: () => Date = () => new Date()): CoordinatorHome {
   const organisation = useOrganisationStore();
   const workdays = ref<WorkdayDto[]>([]);
-  const latestSignups = ref<RosterRow[]>([]);
+  const latestSignups = ref<RecentSignup[]>([]);
   const loaded = ref(false);
   const extras: HomeExtras = { readyBySite: ref(null), brining: ref(null), monitoringDue: ref(null), campaigns: ref(null) };
 
@@ -80,14 +80,14 @@ export function useCoordinatorHome(now: () => Date = () => new Date()): Coordina
     return listWorkdays({ from: zonedTime(localDateKey(now(), tz), tz).toISOString() });
   });
 
-  async function loadSignups(workday: WorkdayDto | null): Promise<void> {
+  async function loadSignups(): Promise<void> {
     // Only a nice-to-have on the home page: a failure leaves the list out rather than the page.
-    const rows = workday ? await fetchRoster(workday.id).catch(() => []) : [];
-    latestSignups.value = [...rows].sort((a, b) => b.waiverSignedAt.localeCompare(a.waiverSignedAt)).slice(0, SIGNUPS_SHOWN);
+    latestSignups.value = await fetchRecentSignups(SIGNUPS_SHOWN).catch(() => []);
   }
 
   function loadExtras(): Promise<unknown> {
     return Promise.all([
+      loadSignups(),
       part(extras.readyBySite, readyBySite),
       part(extras.brining, () => fetchNurseryTasks()),
       part(extras.monitoringDue, fetchMonitoringDue),
@@ -101,7 +101,6 @@ export function useCoordinatorHome(now: () => Date = () => new Date()): Coordina
     if (rows) {
       workdays.value = rows;
       loaded.value = true;
-      await loadSignups(next.value);
     }
     await pending;
   }

@@ -59,6 +59,7 @@ const routes: RouteCase[] = [
   { method: 'delete', path: `/api/workdays/${NO_ID}/signups/mine`, expect: SIGNED_IN_404 },
   { method: 'get', path: `/api/workdays/${NO_ID}/crew`, expect: SIGNED_IN_404 },
   { method: 'get', path: `/api/workdays/${NO_ID}/roster`, expect: STAFF_404 },
+  { method: 'get', path: '/api/signups/recent?limit=5', expect: STAFF },
   { method: 'post', path: `/api/signups/${NO_ID}/check-in`, body: {}, expect: STAFF_404 },
   { method: 'post', path: `/api/signups/${NO_ID}/check-out`, body: {}, expect: STAFF_404 },
   { method: 'post', path: `/api/signups/${NO_ID}/no-show`, expect: STAFF_404 },

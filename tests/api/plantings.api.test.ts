@@ -146,8 +146,12 @@ describe('DELETE /api/workdays/:id/plantings/:treeId', () => {
     const { site, workday, day } = await pastPlanting();
     const tree = await buildTree(t.db, { stage: 'ready' });
     await record(workday.id, { trees: [{ treeId: tree.id }] }).expect(200);
+    const listed = async () => (await staff.agent.get(`/api/workdays/${workday.id}/plantings`).expect(200)).body.trees;
+    expect(await listed()).toEqual([expect.objectContaining({ id: tree.id, hasChecks: false })]);
     const visit = await t.db.getRepository(MonitoringVisit).save({ siteId: site.id, visitedOn: day });
+    // "Missing" keeps the stage planted, so only hasChecks tells the screen the undo would be refused.
     await t.db.getRepository(TreeCheck).insert({ visitId: visit.id, treeId: tree.id, condition: 'missing' });
+    expect(await listed()).toEqual([expect.objectContaining({ id: tree.id, stage: 'planted', hasChecks: true })]);
     expect((await undo(workday.id, tree.id)).status).toBe(409);
     expect((await t.db.getRepository(Tree).findOneByOrFail({ id: tree.id })).stage).toBe('planted');
   });

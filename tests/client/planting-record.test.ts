@@ -18,7 +18,7 @@ const workdayId = randomUUID();
 const BED_M = 0.3048;
 
 function plantingTree(tag: string, overrides: Partial<PlantingTree> = {}): PlantingTree {
-  return { id: randomUUID(), tag, stage: 'ready', heightCm: 60, reserved: true, planted: false, plantedOn: null, plantedBedElevationM: null, suggestedBedElevationM: BED_M, ...overrides };
+  return { id: randomUUID(), tag, stage: 'ready', heightCm: 60, reserved: true, planted: false, plantedOn: null, plantedBedElevationM: null, suggestedBedElevationM: BED_M, hasChecks: false, ...overrides };
 }
 
 function plantingList(trees: PlantingTree[], overrides: Partial<PlantingList['workday']> = {}): PlantingList {
@@ -175,6 +175,20 @@ describe('Record planting', () => {
     await waitFor(() => expect(deleted).toEqual([planted.id]));
     expect(await main.findByText('T-0007 is back in the nursery ledger.')).toBeTruthy();
     expect(main.getByRole('checkbox', { name: 'Plant T-0007' })).toBeTruthy();
+  });
+
+  it('offers no undo for trees monitoring has checked, even one still marked planted after a missing check', async () => {
+    const fresh = plantingTree('T-0007', { stage: 'planted', planted: true, plantedOn: '2025-03-15' });
+    const missing = plantingTree('T-0008', { stage: 'planted', planted: true, plantedOn: '2025-03-15', hasChecks: true });
+    const alive = plantingTree('T-0009', { stage: 'alive', planted: true, plantedOn: '2025-03-15', hasChecks: true });
+    const main = await open(plantingList([fresh, missing, alive]));
+
+    const done = within(main.getByRole('list', { name: 'Trees planted by this workday' }));
+    expect(done.getByRole('button', { name: 'Undo the planting of T-0007' })).toBeTruthy();
+    expect(done.queryByRole('button', { name: 'Undo the planting of T-0008' })).toBeNull();
+    expect(done.queryByRole('button', { name: 'Undo the planting of T-0009' })).toBeNull();
+    const [, second, third] = done.getAllByRole('listitem');
+    for (const item of [second!, third!]) expect(item.textContent).toMatch('No undo: monitoring has checked this tree, so correct its checks instead.');
   });
 
   it('records nothing for a workday that is not a planting one', async () => {

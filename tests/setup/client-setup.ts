@@ -28,9 +28,13 @@ export const server = setupServer(
   http.get('/api/nursery/tasks', () => HttpResponse.json({ date: '2025-01-01', tasks: [], skipped: [] })),
   http.get('/api/monitoring/due', () => HttpResponse.json({ today: '2025-01-01', toleranceDays: 14, sites: [] })),
   http.get('/api/campaigns', () => HttpResponse.json({ campaigns: [] })),
+  // ...and who signed up or cancelled lately.
+  http.get('/api/signups/recent', () => HttpResponse.json({ signups: [] })),
+  // Workday pages list the trees set aside for the day (nursery.router.ts answers { trees: TreeRow[] }): none unless a test says so.
+  http.get('/api/workdays/:id/reserved-trees', () => HttpResponse.json({ trees: [] })),
   // The volunteer home shows my workdays and this year's hours: nothing yet, unless a test says otherwise.
   http.get('/api/me/workdays', () => HttpResponse.json({ workdays: [] })),
-  http.get('/api/me/hours', () => HttpResponse.json({ rows: [], totalMinutes: 0, totalHours: 0, workdaysAttended: 0 })),
+  http.get('/api/me/hours', () => HttpResponse.json({ rows: [], totalMinutes: 0, totalHours: 0, workdaysAttended: 0, crewTreesPlanted: 0 })),
 );
 
 beforeAll(() => server.listen({ onUnhandledRequest: 'error' }));

@@ -25,7 +25,7 @@ describe('HomeVolunteerPanel', () => {
           ],
         }),
       ),
-      http.get('/api/me/hours', () => HttpResponse.json({ rows: [], totalMinutes: 750, totalHours: 12.5, workdaysAttended: 4 })),
+      http.get('/api/me/hours', () => HttpResponse.json({ rows: [], totalMinutes: 750, totalHours: 12.5, workdaysAttended: 4, crewTreesPlanted: 37 })),
       http.get('/api/workdays', ({ request }) => {
         seenOpen.push(new URL(request.url));
         return HttpResponse.json({ workdays: [open, next, full] });
@@ -45,6 +45,7 @@ describe('HomeVolunteerPanel', () => {
 
     const year = await screen.findByRole('region', { name: 'Your year' });
     expect(year.textContent).toMatch(/12\.5 h of volunteer time over 4 workdays this year/);
+    expect(year.textContent).toMatch(/37 trees planted by crews you were on/);
 
     const openPanel = within(screen.getByRole('region', { name: 'Workdays that need people' }));
     expect((await openPanel.findAllByRole('heading', { level: 3 })).map((h) => h.textContent?.trim())).toEqual(['Nursery potting']);
@@ -58,5 +59,6 @@ describe('HomeVolunteerPanel', () => {
     expect(await panel.findByText(/You don't have a place on a workday yet/)).toBeTruthy();
     expect(panel.getByRole('link', { name: 'Find one to join' }).getAttribute('href')).toBe('/workdays');
     expect(await screen.findByText(/Every upcoming workday is full or you're already on it/)).toBeTruthy();
+    expect((await screen.findByRole('region', { name: 'Your year' })).textContent).toMatch(/0 trees planted by crews you were on/);
   });
 });

@@ -10,3 +10,4 @@ export { dayCapacity, type DayCapacity, type DayCapacityInput } from './capacity
 export { ruleOfThumbPersons, personsFromWeightCapacity183_41, personsFromManualWeightCapacity183_43 } from './rules-of-thumb.js';
 export * from './api.js';
 export { violationText, type ViolationWords } from './violation-text.js';
+export { warmUpInstance } from './warm-up.js';

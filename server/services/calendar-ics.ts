@@ -5,7 +5,8 @@ import type { Workday } from '../db/entities/workday.entity.js';
 import { calendarDescription, meetingPointOf, workdayUrl, type CrewMailWorkday } from '../domain/crew-mails.js';
 
 export const ICS_CONTENT_TYPE = 'text/calendar; charset=utf-8';
-const PROD_ID = '-//Ebbroot//Workdays//EN';
+// ical-generator writes the leading '-' itself (PRODID:-//Ebbroot//Workdays//EN).
+const PROD_ID = '//Ebbroot//Workdays//EN';
 
 /** `workday-<id>@<host of APP_URL>`: the same in every feed and attachment, so edits replace the entry. */
 export const workdayUid = (appUrl: string, id: string) => `workday-${id}@${new URL(appUrl).hostname}`;

@@ -41,8 +41,8 @@ export function useSponsorThanks(sessionId: string, options: SponsorThanksOption
       error.value = null;
     } catch (err) {
       error.value = errorMessage(err, { not_found: "We couldn't find this checkout. If you paid, your receipt will still arrive by e-mail." });
-      // An unknown session stays unknown; anything else (a dropped connection) is worth another try.
-      if (err instanceof ApiError && err.code === 'not_found') return finish(false);
+      // An unknown or malformed session stays so (any 4xx); a dropped connection or a 5xx is worth another try.
+      if (err instanceof ApiError && err.status >= 400 && err.status < 500) return finish(false);
     }
     if (stopped) return;
     if (thanks.value?.recorded) return finish(false);

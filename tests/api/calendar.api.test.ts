@@ -22,6 +22,8 @@ const eventsAt = async (path: string) => {
   const res = await get(path);
   expect(res.status).toBe(200);
   expect(res.headers['content-type']).toBe('text/calendar; charset=utf-8');
+  // RFC 5545 §3.7.3 shows PRODID as a formal public identifier starting with a single "-//".
+  expect(res.text).toMatch(/^PRODID:-\/\/Ebbroot\/\/Workdays\/\/EN\r?$/m);
   return parseCalendar(res.text).events;
 };
 

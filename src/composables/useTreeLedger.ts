@@ -1,6 +1,8 @@
 import { reactive, ref, type Ref } from 'vue';
 import type { BulkMoveBody, TreeRow, TreeStage } from '@shared/schemas/nursery.schema';
+import { ApiError } from '@/api/http';
 import { listTrees, moveTrees, type TreeQuery } from '@/api/trees';
+import { errorMessage } from '@/utils/error-message';
 import { useAsyncAction } from './useAsyncAction';
 
 export interface TreeLedger {
@@ -25,7 +27,8 @@ export function useTreeLedger(pageSize = 25): TreeLedger {
   const total = ref(0);
   const selected = ref<string[]>([]);
   const list = useAsyncAction(listTrees);
-  const bulk = useAsyncAction(moveTrees, { validation_failed: 'Those trees could not be moved; nothing was changed.' });
+  const moving = ref(false);
+  const moveError = ref<string | null>(null);
 
   async function reload(): Promise<void> {
     const page = await list.run({ ...query });
@@ -43,8 +46,16 @@ export function useTreeLedger(pageSize = 25): TreeLedger {
 
   async function move(to: { stage?: TreeStage; tankId?: string | null }): Promise<boolean> {
     const body: BulkMoveBody = { treeIds: [...selected.value], ...to };
-    const done = await bulk.run(body);
-    if (!done) return false;
+    moving.value = true;
+    moveError.value = null;
+    try {
+      await moveTrees(body);
+    } catch (err) {
+      moveError.value = refusal(err);
+      return false;
+    } finally {
+      moving.value = false;
+    }
     selected.value = [];
     await reload();
     return true;
@@ -52,6 +63,13 @@ export function useTreeLedger(pageSize = 25): TreeLedger {
 
   return {
     query, trees, total, selected, loading: list.loading, error: list.error,
-    moving: bulk.loading, moveError: bulk.error, reload, search, move,
+    moving, moveError, reload, search, move,
   };
+}
+
+/** The server names each tree that cannot move and why (e.g. stages only move forward): show those reasons, not only that nothing moved. */
+function refusal(err: unknown): string {
+  const reasons = err instanceof ApiError && err.code === 'validation_failed' ? (err.fields?.treeIds ?? []) : [];
+  if (reasons.length > 0) return `Nothing was moved. ${reasons.join('. ')}.`;
+  return errorMessage(err, { validation_failed: 'Those trees could not be moved; nothing was changed.' });
 }

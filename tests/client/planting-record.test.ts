@@ -198,4 +198,13 @@ describe('Record planting', () => {
     expect(await screen.findByText('Only planting workdays record plantings.')).toBeTruthy();
     expect(screen.queryByRole('button', { name: /as planted/ })).toBeNull();
   });
+
+  it('records nothing before the workday has come, and says from when it can', async () => {
+    // The clock is 20 Mar 2025; the server refuses a planting date in the future.
+    server.use(http.get(`/api/workdays/${workdayId}/plantings`, () => HttpResponse.json(plantingList([plantingTree('T-0001')], { status: 'published', localDate: '2025-03-22' }))));
+    await renderApp(`/workdays/${workdayId}/planting`, coordinator);
+
+    expect(await screen.findByText('This workday is on Sat 22 Mar 2025: plantings are recorded on the day or after it.')).toBeTruthy();
+    expect(screen.queryByRole('button', { name: /as planted/ })).toBeNull();
+  });
 });

@@ -30,6 +30,27 @@ describe('NurseryView: trees', () => {
     expect(cards.getByRole('checkbox', { name: 'Select tree T-0002' })).toBeTruthy();
   });
 
+  it('pages on a phone with prev and next around "Page n of m", as numbered buttons would not fit', async () => {
+    await setViewport(375, 812);
+    mockNursery({ trees: [t1, t2], tanks: [tankA] });
+    const queries: URLSearchParams[] = [];
+    server.use(
+      http.get('/api/trees', ({ request }) => {
+        queries.push(new URL(request.url).searchParams);
+        return HttpResponse.json({ trees: [t1, t2], total: 60 });
+      }),
+    );
+    const user = userEvent.setup();
+    await renderApp('/nursery', coordinator);
+
+    // 60 trees at 25 a page make 3 pages.
+    expect(await screen.findByText('Page 1 of 3')).toBeTruthy();
+    expect(document.querySelector('.el-pager')).toBeNull();
+    await user.click(screen.getByRole('button', { name: 'Go to next page' }));
+    await waitFor(() => expect(queries.at(-1)?.get('page')).toBe('2'));
+    expect(await screen.findByText('Page 2 of 3')).toBeTruthy();
+  });
+
   it('lists trees with stage words, filters by stage and tag, and hides bulk actions from volunteers', async () => {
     const queries = mockNursery({ trees: [t1, t2], tanks: [tankA, tankB] });
     const user = userEvent.setup();
@@ -70,6 +91,32 @@ describe('NurseryView: trees', () => {
     await user.click(bar.getByRole('button', { name: 'Move to tank' }));
 
     await waitFor(() => expect(body).toEqual({ treeIds: [t1.id, t2.id], tankId: tankB.id }));
+    // The bar goes with the selection; a line says what was done.
+    expect((await screen.findByRole('status')).textContent).toBe('Moved 2 trees to Tank B.');
+    expect(screen.queryByRole('region', { name: 'Bulk actions' })).toBeNull();
+  });
+
+  it('says which trees could not move and why when the server refuses a bulk move', async () => {
+    mockNursery({ trees: [t1, t2], tanks: [tankA] });
+    server.use(
+      http.post('/api/trees/bulk/move', () =>
+        HttpResponse.json(
+          { error: { code: 'validation_failed', message: '1 of the trees cannot move; nothing was changed', fields: { treeIds: ['T-0001 is brining; stages only move forward (or to lost)'] } } },
+          { status: 400 },
+        ),
+      ),
+    );
+    const user = userEvent.setup();
+    await renderApp('/nursery', coordinator);
+
+    await user.click(await screen.findByRole('checkbox', { name: 'Select tree T-0001' }));
+    const bar = within(screen.getByRole('region', { name: 'Bulk actions' }));
+    await user.click(bar.getByRole('combobox', { name: 'Move to stage' }));
+    await user.click(await screen.findByRole('option', { name: 'Potted' }));
+    await user.click(bar.getByRole('button', { name: 'Move to stage' }));
+
+    expect(await bar.findByText('Nothing was moved. T-0001 is brining; stages only move forward (or to lost).')).toBeTruthy();
+    expect(bar.getByText('1 tree selected')).toBeTruthy();
   });
 
   it('opens a tree from its label address with its history and growth', async () => {

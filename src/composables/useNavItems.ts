@@ -50,6 +50,7 @@ export function useNavItems(): ComputedRef<NavItem[]> {
     if (session.isCoordinator) items.push({ name: 'fleet', label: 'Fleet', group: 'workdays' });
     if (session.isCoordinator) items.push({ name: 'monitoring-visits', label: 'Monitoring', group: 'nursery' }, { name: 'reports', label: 'Reports', group: 'giving' });
     if (session.isAdmin) items.push({ name: 'donations', label: 'Donations', group: 'giving' });
+    if (session.isAdmin) items.push({ name: 'campaigns-admin', label: 'Campaigns', group: 'giving' });
     if (session.isAdmin) items.push({ name: 'organisation-settings', label: 'Settings', group: 'organisation' });
     items.push({ name: 'account', label: 'My account', group: 'account' });
     return items;

@@ -130,7 +130,7 @@ describe('DonationsView', () => {
     expect(giving.getAttribute('aria-current')).toBe('true');
     await user.click(giving);
     const group = within(groupPanel(giving));
-    expect(group.getAllByRole('link').map((a) => a.textContent?.trim())).toEqual(['Sponsor a tree', 'Reports', 'Donations']);
+    expect(group.getAllByRole('link').map((a) => a.textContent?.trim())).toEqual(['Sponsor a tree', 'Reports', 'Donations', 'Campaigns']);
     expect(group.getByRole('link', { name: 'Donations' }).getAttribute('aria-current')).toBe('page');
   });
 

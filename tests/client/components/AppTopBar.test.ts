@@ -29,7 +29,7 @@ describe('AppTopBar on a wide screen', () => {
     await screen.findByRole('heading', { level: 2, name: 'At the water' });
 
     expect(topLevel()).toEqual(['Home', 'Workdays', 'Tides & sites', 'Nursery', 'Giving & reports', 'Organisation']);
-    const groups = { ...coordinatorGroups, 'Giving & reports': ['Sponsor a tree', 'Reports', 'Donations'], Organisation: ['People', 'Settings'] };
+    const groups = { ...coordinatorGroups, 'Giving & reports': ['Sponsor a tree', 'Reports', 'Donations', 'Campaigns'], Organisation: ['People', 'Settings'] };
     for (const [group, links] of Object.entries(groups)) expect(await groupLinks(user, group)).toEqual(links);
     const banner = within(screen.getByRole('banner'));
     expect(banner.getByRole('link', { name: 'My account' }).getAttribute('href')).toBe('/account');
@@ -139,7 +139,7 @@ describe('AppTopBar by screen width', () => {
     expect(section('Workdays')).toEqual(coordinatorGroups.Workdays);
     expect(section('Tides & sites')).toEqual(coordinatorGroups['Tides & sites']);
     expect(section('Nursery')).toEqual(coordinatorGroups.Nursery);
-    expect(section('Giving & reports')).toEqual(['Sponsor a tree', 'Reports', 'Donations']);
+    expect(section('Giving & reports')).toEqual(['Sponsor a tree', 'Reports', 'Donations', 'Campaigns']);
     expect(section('Organisation')).toEqual(['People', 'Settings']);
     expect(drawer.queryAllByRole('button', { expanded: false })).toHaveLength(0);
     expect(drawer.getByRole('link', { name: 'Home' })).toBeTruthy();

@@ -100,6 +100,9 @@ describe('WorkdayView', () => {
     const { main } = await openPage(workday);
 
     expect(await main.findByText("You're on the crew")).toBeTruthy();
+    // The jump button at the top no longer invites me to sign up for a day I'm already on.
+    expect(main.getByRole('button', { name: 'See your place on this workday' })).toBeTruthy();
+    expect(main.queryByRole('button', { name: 'Sign up for this workday' })).toBeNull();
     await user.click(main.getByRole('button', { name: 'Cancel my place' }));
     const dialog = await screen.findByRole('dialog', { name: 'Give up your place?' });
     await user.click(within(dialog).getByRole('button', { name: 'Yes, cancel my place' }));
@@ -107,6 +110,7 @@ describe('WorkdayView', () => {
     await waitFor(() => expect(seen.deleted).toBe(1));
     expect(await main.findByRole('radio', { name: /Planter/ })).toBeTruthy();
     expect(main.queryByText("You're on the crew")).toBeNull();
+    expect(main.getByRole('button', { name: 'Sign up for this workday' })).toBeTruthy();
   });
 
   it('says why a place cannot be cancelled once the workday has started', async () => {

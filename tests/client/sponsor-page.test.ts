@@ -113,6 +113,8 @@ describe('SponsorView (public campaign page)', () => {
     expect(await main.findByText('Is required')).toBeTruthy();
     expect(await main.findByText('Must be an e-mail address')).toBeTruthy();
     expect(seen.bodies).toHaveLength(0);
+    // Focus lands on the first field that needs another look (the name, above the e-mail).
+    await waitFor(() => expect(document.activeElement).toBe(main.getByLabelText('Your name')));
   });
 
   it("shows the server's field messages on the form and a closed campaign above it", async () => {

@@ -73,6 +73,8 @@ describe('/api/workdays/:id/trip-plan', () => {
     const site = await buildSite(t.db, { launchDistanceM: 800 });
     const startsAt = new Date('2026-04-10T13:00:00Z');
     const workday = await buildWorkday(t.db, { siteId: site.id, startsAt, endsAt: new Date('2026-04-10T16:00:00Z') });
+    // Each test's day has this canoe alone in the fleet: earlier tests' craft are retired, so the plan is the same every run.
+    await t.db.createQueryBuilder().update(Craft).set({ active: false }).execute();
     const canoe = await buildCraft(t.db, { potSlots: 6 });
     const [paddler, seat, kayaker, planter, shore] = await Promise.all([1, 2, 3, 4, 5].map(() => buildUser(t.db)));
     await buildSignup(t.db, { workdayId: workday.id, userId: paddler!.id, role: 'seat' });
@@ -146,7 +148,12 @@ describe('/api/workdays/:id/trip-plan', () => {
     const runs = (built.body.plan as TripPlanJson).runs;
     const index = runs.findIndex((r) => r.craftId === canoe.id && r.run === 1);
     // Three people and six pots in a two-seat canoe rated 350 kg (245 kg at the 70 % margin).
-    const broken = runs.map((r, i) => (i === index ? { ...r, people: [paddler.id, seat.id, planter.id], pots: 6 } : r));
+    // Other test files share this database's fleet, so the solver may have picked another craft:
+    // then the canoe's first run is added by hand, timed like the plan's first run.
+    const overload = { people: [paddler.id, seat.id, planter.id], pots: 6 };
+    const broken = index >= 0
+      ? runs.map((r, i) => (i === index ? { ...r, ...overload } : r))
+      : [...runs, { ...runs[0]!, craftId: canoe.id, run: 1, ...overload }];
     const res = await agent.put(`/api/workdays/${workday.id}/trip-plan`).set('X-CSRF-Token', token).send({ runs: broken });
     expect(res.status).toBe(400);
     const { error } = TripPlanRefusal.parse(res.body);

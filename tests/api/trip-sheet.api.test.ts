@@ -54,6 +54,8 @@ async function plannedDay() {
   await t.db.getRepository(Craft).update({ active: true }, { active: false });
   const site = await buildSite(t.db, { launchName: 'Mill Creek ramp', launchDistanceM: 800 });
   const workday = await buildWorkday(t.db, { title: 'Spring planting', siteId: site.id, startsAt: new Date('2026-04-10T13:00:00Z'), endsAt: new Date('2026-04-10T16:00:00Z') });
+  // This canoe alone in the fleet: earlier tests' craft are retired, so the plan is the same every run.
+  await t.db.createQueryBuilder().update(Craft).set({ active: false }).execute();
   const canoe = await buildCraft(t.db, { potSlots: 6, notes: 'green hull' });
   const ann = await buildUser(t.db, { name: 'Ann Ortiz' });
   const mia = await buildUser(t.db, { name: 'Mia Ortiz' });
